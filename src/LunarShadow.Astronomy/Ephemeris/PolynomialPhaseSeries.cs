@@ -1,0 +1,163 @@
+using System.Runtime.CompilerServices;
+using System.Runtime.Intrinsics;
+
+namespace LunarShadow.Astronomy.Ephemeris;
+
+/// <summary>
+/// A Poisson series Σₖ tᵏ Σᵢ Aₖᵢ·sin(φₖᵢ(t)) whose phases are polynomials φ = p₀ + p₁t + p₂t² + p₃t³ + p₄t⁴,
+/// the shape both ELP/MPP02 and VSOP87 take. Stored column-wise and summed four terms at a time, giving the
+/// value and its time derivative in one pass.
+/// </summary>
+internal sealed class PolynomialPhaseSeries
+{
+    private readonly PowerGroup[] _groups;
+
+    /// <summary>Number of terms over all powers of t.</summary>
+    public int TermCount { get; }
+
+    private PolynomialPhaseSeries(PowerGroup[] groups)
+    {
+        _groups = groups;
+        TermCount = groups.Sum(g => g.Count);
+    }
+
+    /// <summary>
+    /// Builds a series from rows of [amplitude, p₀, p₁, (p₂, p₃, p₄)] per power of t (index = power).
+    /// </summary>
+    public static PolynomialPhaseSeries FromSineRows(IReadOnlyList<double[][]> rowsByPower) =>
+        new(rowsByPower.Select((rows, power) => new PowerGroup(power, rows, 0.0)).ToArray());
+
+    /// <summary>
+    /// Builds a series from VSOP87 rows of [A, B, C] meaning A·cos(B + C·t), per power of t.
+    /// </summary>
+    public static PolynomialPhaseSeries FromCosineRows(IReadOnlyList<double[][]> rowsByPower) =>
+        new(rowsByPower.Select((rows, power) => new PowerGroup(power, rows, Math.PI / 2)).ToArray());
+
+    /// <summary>How a table's rows read.</summary>
+    public enum TermShape
+    {
+        /// <summary>[A, p₀, p₁, p₂, p₃, p₄]: A·sin(φ(t)) (ELP/MPP02).</summary>
+        Sine,
+
+        /// <summary>[A, B, C]: A·cos(B + C·t) (VSOP87).</summary>
+        Cosine,
+    }
+
+    /// <summary>The series of one coordinate from blocks named coordinate + power ("L0", "L1", …).</summary>
+    public static PolynomialPhaseSeries FromBlocks(Embedded.BlockFile file, string coordinate, TermShape shape)
+    {
+        var powers = new List<double[][]>();
+        for (var k = 0; file.Contains($"{coordinate}{k}"); k++) powers.Add(file[$"{coordinate}{k}"]);
+        return shape == TermShape.Sine ? FromSineRows(powers) : FromCosineRows(powers);
+    }
+
+    /// <summary>The series' value and its derivative with respect to t.</summary>
+    public (double Value, double Rate) Evaluate(double t)
+    {
+        double value = 0, rate = 0;
+        foreach (var g in _groups)
+        {
+            var (sum, sumRate) = g.Sum(t);
+            var tk = g.Power == 0 ? 1.0 : Math.Pow(t, g.Power);
+            var dtk = g.Power == 0 ? 0.0 : g.Power * Math.Pow(t, g.Power - 1);
+            value += tk * sum;
+            rate += dtk * sum + tk * sumRate;
+        }
+        return (value, rate);
+    }
+
+    private sealed class PowerGroup
+    {
+        private const int Lanes = 4;
+        private readonly double[] _a, _p0, _p1, _p2, _p3, _p4;
+        private readonly bool _linearPhase;
+
+        public int Power { get; }
+
+        public int Count { get; }
+
+        public PowerGroup(int power, double[][] rows, double phaseShift)
+        {
+            Power = power;
+            Count = rows.Length;
+            var padded = (rows.Length + Lanes - 1) / Lanes * Lanes;
+            _a = new double[padded];
+            _p0 = new double[padded];
+            _p1 = new double[padded];
+            _p2 = new double[padded];
+            _p3 = new double[padded];
+            _p4 = new double[padded];
+            for (var i = 0; i < rows.Length; i++)
+            {
+                var r = rows[i];
+                _a[i] = r[0];
+                _p0[i] = r[1] + phaseShift;
+                _p1[i] = r[2];
+                if (r.Length > 3) _p2[i] = r[3];
+                if (r.Length > 4) _p3[i] = r[4];
+                if (r.Length > 5) _p4[i] = r[5];
+            }
+            _linearPhase = _p2.All(v => v == 0) && _p3.All(v => v == 0) && _p4.All(v => v == 0);
+        }
+
+        /// <summary>Σ A·sin φ and Σ A·cos φ·φ′ at t.</summary>
+        public (double Sum, double Rate) Sum(double t) =>
+            Vector256.IsHardwareAccelerated ? SumVector(t) : SumScalar(t);
+
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+        private (double, double) SumVector(double t)
+        {
+            var vt = Vector256.Create(t);
+            var t2 = t * t;
+            var vt2 = Vector256.Create(t2);
+            var vt3 = Vector256.Create(t2 * t);
+            var vt4 = Vector256.Create(t2 * t2);
+            var two = Vector256.Create(2.0);
+            var threeT2 = Vector256.Create(3.0 * t2);
+            var fourT3 = Vector256.Create(4.0 * t2 * t);
+            var twoPi = Vector256.Create(2 * Math.PI);
+            var invTwoPi = Vector256.Create(1 / (2 * Math.PI));
+            var sum = Vector256<double>.Zero;
+            var rate = Vector256<double>.Zero;
+            ReadOnlySpan<double> a = _a, p0 = _p0, p1 = _p1, p2 = _p2, p3 = _p3, p4 = _p4;
+            for (var i = 0; i < a.Length; i += Lanes)
+            {
+                var c1 = Vector256.Create(p1.Slice(i, Lanes));
+                Vector256<double> phase, phaseRate;
+                if (_linearPhase)
+                {
+                    phase = Vector256.Create(p0.Slice(i, Lanes)) + c1 * vt;
+                    phaseRate = c1;
+                }
+                else
+                {
+                    var c2 = Vector256.Create(p2.Slice(i, Lanes));
+                    var c3 = Vector256.Create(p3.Slice(i, Lanes));
+                    var c4 = Vector256.Create(p4.Slice(i, Lanes));
+                    phase = Vector256.Create(p0.Slice(i, Lanes)) + c1 * vt + c2 * vt2 + c3 * vt3 + c4 * vt4;
+                    phaseRate = c1 + two * c2 * vt + c3 * threeT2 + c4 * fourT3;
+                }
+                phase -= twoPi * Vector256.Round(phase * invTwoPi);
+                var (sin, cos) = Vector256.SinCos(phase);
+                var amplitude = Vector256.Create(a.Slice(i, Lanes));
+                sum += amplitude * sin;
+                rate += amplitude * cos * phaseRate;
+            }
+            return (Vector256.Sum(sum), Vector256.Sum(rate));
+        }
+
+        private (double, double) SumScalar(double t)
+        {
+            double sum = 0, rate = 0;
+            for (var i = 0; i < Count; i++)
+            {
+                var phase = _p0[i] + t * (_p1[i] + t * (_p2[i] + t * (_p3[i] + t * _p4[i])));
+                var phaseRate = _p1[i] + t * (2 * _p2[i] + t * (3 * _p3[i] + t * 4 * _p4[i]));
+                var (sin, cos) = Math.SinCos(Math.IEEERemainder(phase, 2 * Math.PI));
+                sum += _a[i] * sin;
+                rate += _a[i] * cos * phaseRate;
+            }
+            return (sum, rate);
+        }
+    }
+}
