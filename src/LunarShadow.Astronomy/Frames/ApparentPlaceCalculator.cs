@@ -1,0 +1,70 @@
+using LunarShadow.Astronomy.Ephemeris;
+using LunarShadow.Astronomy.Time;
+using LunarShadow.Astronomy.Units;
+
+namespace LunarShadow.Astronomy.Frames;
+
+/// <summary>
+/// Apparent geocentric and topocentric places of the Sun and Moon: ELP/MPP02 and VSOP87 in the J2000 ecliptic,
+/// rotated to the J2000 equator (ε₀ = 84381.406″), precessed (Vondrák et al. 2011), nutated (IAU 2000B), with light
+/// time and annual aberration.
+/// </summary>
+public sealed class ApparentPlaceCalculator(LunarTheory moon, EarthOrbitTheory earth)
+{
+    /// <summary>The calculator on the embedded series (truncated ELP/MPP02, full VSOP87B).</summary>
+    public static ApparentPlaceCalculator Default { get; } = new(LunarTheory.Truncated, EarthOrbitTheory.Vsop87B);
+
+    private static readonly RotationMatrix EclipticToEquatorJ2000 = RotationMatrix.AboutX(-VondrakPrecession.ObliquityAtJ2000.Radians);
+
+    /// <summary>The Sun and Moon from the Earth's centre at an instant given in both TT and UT1.</summary>
+    public GeocentricSky Geocentric(TtInstant tt, Ut1Instant ut1)
+    {
+        var nutation = NutationIau2000B.At(tt);
+        var meanObliquity = Obliquity.Mean(tt);
+        var toTrueOfDate = nutation.Matrix(meanObliquity) * VondrakPrecession.Matrix(tt) * EclipticToEquatorJ2000;
+        var trueObliquity = meanObliquity + nutation.InObliquity;
+
+        // The Moon: its geocentric position one light time earlier. The Earth's own motion during that light time
+        // and the annual aberration cancel for a body that travels with the Earth, so only the Moon's motion counts.
+        var moonState = moon.GeocentricState(tt);
+        var moonLightTimeDays = moonState.PositionKm.Length / AnnualAberration.SpeedOfLightKmPerDay;
+        var moonApparent = moonState.PositionKm - moonState.VelocityKmPerDay * moonLightTimeDays;
+
+        // The Sun: at rest in the heliocentric frame, so light time leaves its direction unchanged; annual aberration
+        // comes from the Earth's heliocentric velocity (the negated velocity of the geocentric Sun).
+        var sunState = earth.GeocentricSun(tt);
+        var sunDistance = sunState.PositionKm.Length;
+        var sunApparent = AnnualAberration.Apply(sunState.PositionKm, -sunState.VelocityKmPerDay) * sunDistance;
+
+        var moonPlace = Place(toTrueOfDate * moonApparent, trueObliquity, BodyDisc.MoonSemiDiameter);
+        var sunPlace = Place(toTrueOfDate * sunApparent, trueObliquity, BodyDisc.SunSemiDiameter);
+        var gast = EarthRotation.GreenwichApparentSiderealTime(ut1, tt, nutation, meanObliquity);
+        return new GeocentricSky(tt, ut1, moonPlace, sunPlace, nutation, meanObliquity, gast);
+    }
+
+    /// <summary>A body's place seen from a site: full parallax, horizontal coordinates, refraction.</summary>
+    public static TopocentricPlace Topocentric(ApparentPlace body, Angle greenwichApparentSiderealTime, GeodeticLocation site, AirConditions air)
+    {
+        var siteTrueOfDate = RotationMatrix.AboutZ(-greenwichApparentSiderealTime.Radians) * site.EarthFixedKm();
+        var topocentric = body.TrueEquatorialKm - siteTrueOfDate;
+        var rightAscension = topocentric.Longitude;
+        var declination = topocentric.Latitude;
+        var distance = topocentric.Length;
+        var hourAngle = (greenwichApparentSiderealTime + site.Longitude - rightAscension).NormalizedSigned();
+        var horizontal = HorizontalCoordinates.FromHourAngle(hourAngle, declination, site.Latitude);
+        var semiDiameter = Angle.FromRadians(Math.Asin(Math.Sin(body.SemiDiameter.Radians) * body.DistanceKm / distance));
+        return new TopocentricPlace(
+            rightAscension, declination, distance, hourAngle,
+            horizontal.Altitude, AtmosphericRefraction.Apply(horizontal.Altitude, air), horizontal.Azimuth, semiDiameter);
+    }
+
+    private static ApparentPlace Place(CartesianVector trueEquatorial, Angle trueObliquity, Func<double, Angle> semiDiameter)
+    {
+        var distance = trueEquatorial.Length;
+        var ecliptic = RotationMatrix.AboutX(trueObliquity.Radians) * trueEquatorial;
+        return new ApparentPlace(
+            trueEquatorial.Longitude, trueEquatorial.Latitude, distance,
+            ecliptic.Longitude, ecliptic.Latitude,
+            semiDiameter(distance), BodyDisc.HorizontalParallax(distance), trueEquatorial);
+    }
+}
