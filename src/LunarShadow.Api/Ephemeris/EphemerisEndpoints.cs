@@ -1,0 +1,79 @@
+using System.ComponentModel;
+using LunarShadow.Api.Formatting;
+using LunarShadow.Api.Validation;
+using LunarShadow.Astronomy.Embedded;
+using LunarShadow.Astronomy.Ephemeris;
+using LunarShadow.Astronomy.Frames;
+using LunarShadow.Astronomy.Time;
+using Microsoft.AspNetCore.Http.HttpResults;
+
+namespace LunarShadow.Api.Ephemeris;
+
+/// <summary>GET /api/v1/ephemeris: apparent places of the Sun and Moon.</summary>
+internal static class EphemerisEndpoints
+{
+    public static IEndpointRouteBuilder MapEphemerisEndpoints(this IEndpointRouteBuilder routes)
+    {
+        routes.MapGet("/api/v1/ephemeris", Get)
+            .WithName("GetEphemeris")
+            .WithTags("Ephemeris")
+            .WithSummary("Apparent places of the Moon and Sun at one instant")
+            .WithDescription("Geocentric apparent right ascension, declination and distance of date (ELP/MPP02, VSOP87, Vondrák 2011 precession, IAU 2000B nutation, light time and aberration), semi-diameters and parallaxes; with a site, topocentric places with refraction.");
+        return routes;
+    }
+
+    internal static Results<Ok<EphemerisResponse>, ValidationProblem> Get(
+        [Description("The instant, ISO 8601 with Z or an offset, years −1999 to +3000 (e.g. 2025-03-14T06:58:00Z).")] string? utc,
+        [Description(SiteQuery.LatitudeDescription)] string? lat,
+        [Description(SiteQuery.LongitudeDescription)] string? lon,
+        [Description(SiteQuery.ElevationDescription)] string? elevation,
+        [Description(SiteQuery.PressureDescription)] string? pressure,
+        [Description(SiteQuery.TemperatureDescription)] string? temperature,
+        [Description(DeltaTQuery.DeltaTDescription)] string? deltaT,
+        [Description(DeltaTQuery.ModelDescription)] string? deltaTModel)
+    {
+        var reader = new QueryReader();
+        var instant = reader.Instant("utc", utc);
+        var site = SiteQuery.Read(reader, lat, lon, elevation, pressure, temperature);
+        var model = DeltaTQuery.Read(reader, deltaT, deltaTModel);
+        if (!reader.IsValid || instant is null) return Problems.InvalidQuery(reader);
+
+        var converter = new TimeScaleConverter(model);
+        var tt = converter.ToTerrestrialTime(instant.Value);
+        var ut1 = converter.ToUniversalTime(tt);
+        var deltaTValue = converter.DeltaTAt(tt);
+        var sky = ApparentPlaceCalculator.Default.Geocentric(tt, ut1);
+        TopocentricPlace? Topocentric(ApparentPlace body) =>
+            site is { } s ? ApparentPlaceCalculator.Topocentric(body, sky.GreenwichApparentSiderealTime, s.Location, s.Air) : null;
+
+        return TypedResults.Ok(new EphemerisResponse(
+            TimeFormats.Utc(instant.Value),
+            TimeFormats.Tt(tt),
+            TimeFormats.Round(tt.JulianDate.Day, 8),
+            TimeFormats.Round(deltaTValue.Seconds, 3),
+            TimeFormats.Round(deltaTValue.UncertaintySeconds, 3),
+            deltaTValue.Model,
+            "apparent place: true equator and equinox of date, geocentric unless under topocentric",
+            Body(sky.Moon, Topocentric(sky.Moon), isSun: false),
+            Body(sky.Sun, Topocentric(sky.Sun), isSun: true),
+            EmbeddedDataSet.VersionTag));
+    }
+
+    private static BodyPlace Body(ApparentPlace place, TopocentricPlace? topocentric, bool isSun) => new(
+        TimeFormats.Round(place.RightAscension.Hours, 7),
+        TimeFormats.Round(place.Declination.Degrees, 6),
+        TimeFormats.Round(place.DistanceKm, 1),
+        isSun ? TimeFormats.Round(place.DistanceKm / EarthOrbitTheory.AstronomicalUnitKm, 8) : null,
+        TimeFormats.Round(place.EclipticLongitude.Degrees, 6),
+        TimeFormats.Round(place.EclipticLatitude.Degrees, 6),
+        TimeFormats.Round(place.SemiDiameter.Arcseconds, 2),
+        TimeFormats.Round(place.HorizontalParallax.Arcseconds, 3),
+        topocentric is null ? null : new TopocentricBodyPlace(
+            TimeFormats.Round(topocentric.RightAscension.Hours, 7),
+            TimeFormats.Round(topocentric.Declination.Degrees, 6),
+            TimeFormats.Round(topocentric.ApparentAltitude.Degrees, 4),
+            TimeFormats.Round(topocentric.TrueAltitude.Degrees, 4),
+            TimeFormats.Round(topocentric.Azimuth.Degrees, 4),
+            TimeFormats.Round(topocentric.DistanceKm, 1),
+            TimeFormats.Round(topocentric.SemiDiameter.Arcseconds, 2)));
+}

@@ -1,0 +1,30 @@
+using LunarShadow.Api.Ephemeris;
+using Serilog;
+
+namespace LunarShadow.Api.Hosting;
+
+/// <summary>The request pipeline and the endpoint map.</summary>
+internal static class Pipeline
+{
+    public static WebApplication UseLunarShadowPipeline(this WebApplication app)
+    {
+        app.UseExceptionHandler();
+        app.UseStatusCodePages();
+        app.UseSerilogRequestLogging();
+        return app;
+    }
+
+    public static WebApplication MapLunarShadowEndpoints(this WebApplication app)
+    {
+        app.MapOpenApi("/openapi/{documentName}.json");
+        app.UseSwaggerUI(options =>
+        {
+            options.RoutePrefix = "docs";
+            options.SwaggerEndpoint("/openapi/v1.json", "LunarShadow v1");
+            options.DocumentTitle = "LunarShadow API";
+        });
+        app.MapGet("/", () => Results.Redirect("/docs")).ExcludeFromDescription();
+        app.MapEphemerisEndpoints();
+        return app;
+    }
+}
