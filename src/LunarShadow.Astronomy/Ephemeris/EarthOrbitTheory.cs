@@ -15,15 +15,22 @@ public sealed class EarthOrbitTheory
 
     private readonly PolynomialPhaseSeries _longitude, _latitude, _radius;
 
-    private EarthOrbitTheory(BlockFile file)
+    private EarthOrbitTheory(BlockFile file, double minimumContribution = 0)
     {
-        _longitude = PolynomialPhaseSeries.FromBlocks(file, "L", PolynomialPhaseSeries.TermShape.Cosine);
-        _latitude = PolynomialPhaseSeries.FromBlocks(file, "B", PolynomialPhaseSeries.TermShape.Cosine);
-        _radius = PolynomialPhaseSeries.FromBlocks(file, "R", PolynomialPhaseSeries.TermShape.Cosine);
+        // Time spans up to 4 millennia from J2000 over the supported years.
+        const double millennia = 4;
+        _longitude = PolynomialPhaseSeries.FromBlocks(file, "L", PolynomialPhaseSeries.TermShape.Cosine, minimumContribution, millennia);
+        _latitude = PolynomialPhaseSeries.FromBlocks(file, "B", PolynomialPhaseSeries.TermShape.Cosine, minimumContribution, millennia);
+        _radius = PolynomialPhaseSeries.FromBlocks(file, "R", PolynomialPhaseSeries.TermShape.Cosine, minimumContribution, millennia);
     }
 
     /// <summary>The embedded series.</summary>
     public static EarthOrbitTheory Vsop87B { get; } = new(BlockFile.FromResource(EmbeddedDataSet.EarthVsop87B));
+
+    private static readonly Lazy<EarthOrbitTheory> ScreeningSeries = new(() => new EarthOrbitTheory(BlockFile.FromResource(EmbeddedDataSet.EarthVsop87B), 1e-6));
+
+    /// <summary>The same theory keeping only terms that reach 10⁻⁶ (rad or AU) over the supported years, for screening.</summary>
+    public static EarthOrbitTheory Screening => ScreeningSeries.Value;
 
     /// <summary>Number of periodic terms.</summary>
     public int TermCount => _longitude.TermCount + _latitude.TermCount + _radius.TermCount;

@@ -14,12 +14,14 @@ public sealed class LunarTheory
     private readonly double[] _meanLongitude;
     private readonly PolynomialPhaseSeries _longitude, _latitude, _distance;
 
-    private LunarTheory(BlockFile file)
+    private LunarTheory(BlockFile file, double minimumArcseconds = 0, double minimumKm = 0)
     {
+        // Time spans up to 40 centuries from J2000 over the supported years.
+        const double centuries = 40;
         _meanLongitude = file["W1"][0];
-        _longitude = PolynomialPhaseSeries.FromBlocks(file, "L", PolynomialPhaseSeries.TermShape.Sine);
-        _latitude = PolynomialPhaseSeries.FromBlocks(file, "B", PolynomialPhaseSeries.TermShape.Sine);
-        _distance = PolynomialPhaseSeries.FromBlocks(file, "R", PolynomialPhaseSeries.TermShape.Sine);
+        _longitude = PolynomialPhaseSeries.FromBlocks(file, "L", PolynomialPhaseSeries.TermShape.Sine, minimumArcseconds, centuries);
+        _latitude = PolynomialPhaseSeries.FromBlocks(file, "B", PolynomialPhaseSeries.TermShape.Sine, minimumArcseconds, centuries);
+        _distance = PolynomialPhaseSeries.FromBlocks(file, "R", PolynomialPhaseSeries.TermShape.Sine, minimumKm, centuries);
     }
 
     /// <summary>The truncated series (within 0.1″ of the full one), used for all computation.</summary>
@@ -29,6 +31,14 @@ public sealed class LunarTheory
 
     /// <summary>All published terms; slower, for verification.</summary>
     public static LunarTheory Full => FullSeries.Value;
+
+    private static readonly Lazy<LunarTheory> ScreeningSeries = new(() => new LunarTheory(BlockFile.FromResource(EmbeddedDataSet.LunarTruncated), 2.0, 2.0));
+
+    /// <summary>
+    /// The same theory keeping only terms that reach 2″ (or 2 km) over the supported years: good to some 20″, and some
+    /// twenty times cheaper, for screening full Moons before the exact computation.
+    /// </summary>
+    public static LunarTheory Screening => ScreeningSeries.Value;
 
     /// <summary>Number of periodic terms in this series.</summary>
     public int TermCount => _longitude.TermCount + _latitude.TermCount + _distance.TermCount;

@@ -43,11 +43,19 @@ internal sealed class PolynomialPhaseSeries
         Cosine,
     }
 
-    /// <summary>The series of one coordinate from blocks named coordinate + power ("L0", "L1", …).</summary>
-    public static PolynomialPhaseSeries FromBlocks(Embedded.BlockFile file, string coordinate, TermShape shape)
+    /// <summary>
+    /// The series of one coordinate from blocks named coordinate + power ("L0", "L1", …), optionally keeping only the terms
+    /// whose largest contribution over |t| ≤ <paramref name="timeSpan"/> reaches <paramref name="minimumContribution"/>.
+    /// </summary>
+    public static PolynomialPhaseSeries FromBlocks(
+        Embedded.BlockFile file, string coordinate, TermShape shape, double minimumContribution = 0, double timeSpan = 1)
     {
         var powers = new List<double[][]>();
-        for (var k = 0; file.Contains($"{coordinate}{k}"); k++) powers.Add(file[$"{coordinate}{k}"]);
+        for (var k = 0; file.Contains($"{coordinate}{k}"); k++)
+        {
+            var scale = Math.Pow(timeSpan, k);
+            powers.Add(file[$"{coordinate}{k}"].Where(row => Math.Abs(row[0]) * scale >= minimumContribution).ToArray());
+        }
         return shape == TermShape.Sine ? FromSineRows(powers) : FromCosineRows(powers);
     }
 

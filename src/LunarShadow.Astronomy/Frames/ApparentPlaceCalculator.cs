@@ -16,14 +16,35 @@ public sealed class ApparentPlaceCalculator(LunarTheory moon, EarthOrbitTheory e
 
     private static readonly RotationMatrix EclipticToEquatorJ2000 = RotationMatrix.AboutX(-VondrakPrecession.ObliquityAtJ2000.Radians);
 
-    /// <summary>The Sun and Moon from the Earth's centre at an instant given in both TT and UT1.</summary>
-    public GeocentricSky Geocentric(TtInstant tt, Ut1Instant ut1)
+    /// <summary>
+    /// The matrix from the J2000 ecliptic of the theories to the true equator and equinox of date, with the nutation and
+    /// mean obliquity it used.
+    /// </summary>
+    public static (RotationMatrix Matrix, Nutation Nutation, Angle MeanObliquity) ToTrueEquatorOfDate(TtInstant tt)
     {
         var nutation = NutationIau2000B.At(tt);
         var meanObliquity = Obliquity.Mean(tt);
-        var toTrueOfDate = nutation.Matrix(meanObliquity) * VondrakPrecession.Matrix(tt) * EclipticToEquatorJ2000;
-        var trueObliquity = meanObliquity + nutation.InObliquity;
+        return (nutation.Matrix(meanObliquity) * VondrakPrecession.Matrix(tt) * EclipticToEquatorJ2000, nutation, meanObliquity);
+    }
 
+    /// <summary>The Sun and Moon from the Earth's centre at an instant given in both TT and UT1.</summary>
+    public GeocentricSky Geocentric(TtInstant tt, Ut1Instant ut1)
+    {
+        var (toTrueOfDate, nutation, meanObliquity) = ToTrueEquatorOfDate(tt);
+        var trueObliquity = meanObliquity + nutation.InObliquity;
+        var (moonApparent, sunApparent) = ApparentVectorsJ2000Ecliptic(tt);
+        var moonPlace = Place(toTrueOfDate * moonApparent, trueObliquity, BodyDisc.MoonSemiDiameter);
+        var sunPlace = Place(toTrueOfDate * sunApparent, trueObliquity, BodyDisc.SunSemiDiameter);
+        var gast = EarthRotation.GreenwichApparentSiderealTime(ut1, tt, nutation, meanObliquity);
+        return new GeocentricSky(tt, ut1, moonPlace, sunPlace, nutation, meanObliquity, gast);
+    }
+
+    /// <summary>
+    /// The apparent geocentric vectors of the Moon and Sun (km), still in the J2000 ecliptic of the theories: light time
+    /// and aberration applied, precession and nutation not yet. Angles between them are already those of date.
+    /// </summary>
+    public (CartesianVector MoonKm, CartesianVector SunKm) ApparentVectorsJ2000Ecliptic(TtInstant tt)
+    {
         // The Moon: its geocentric position one light time earlier. The Earth's own motion during that light time
         // and the annual aberration cancel for a body that travels with the Earth, so only the Moon's motion counts.
         var moonState = moon.GeocentricState(tt);
@@ -35,11 +56,7 @@ public sealed class ApparentPlaceCalculator(LunarTheory moon, EarthOrbitTheory e
         var sunState = earth.GeocentricSun(tt);
         var sunDistance = sunState.PositionKm.Length;
         var sunApparent = AnnualAberration.Apply(sunState.PositionKm, -sunState.VelocityKmPerDay) * sunDistance;
-
-        var moonPlace = Place(toTrueOfDate * moonApparent, trueObliquity, BodyDisc.MoonSemiDiameter);
-        var sunPlace = Place(toTrueOfDate * sunApparent, trueObliquity, BodyDisc.SunSemiDiameter);
-        var gast = EarthRotation.GreenwichApparentSiderealTime(ut1, tt, nutation, meanObliquity);
-        return new GeocentricSky(tt, ut1, moonPlace, sunPlace, nutation, meanObliquity, gast);
+        return (moonApparent, sunApparent);
     }
 
     /// <summary>A body's place seen from a site: full parallax, horizontal coordinates, refraction.</summary>
