@@ -1,29 +1,101 @@
 using System.Globalization;
+using System.Text.RegularExpressions;
 using LunarShadow.Astronomy.Time;
 using NodaTime;
-using NodaTime.Text;
 
 namespace LunarShadow.Api.Formatting;
 
-/// <summary>How instants appear in responses: UTC as ISO 8601 with Z, TT as ISO 8601 without a zone (labelled TT).</summary>
-internal static class TimeFormats
+/// <summary>
+/// How instants are written and read: ISO 8601 extended format, with UTC ending in Z and TT without a zone. Dates are
+/// in the astronomers' calendar — Julian before 1582 October 15, Gregorian from then on, astronomical year numbering
+/// (year 0 = 1 BC) — so that an eclipse's date, its UTC and its TT always agree with the eclipse canons.
+/// </summary>
+internal static partial class TimeFormats
 {
-    private static readonly InstantPattern UtcPattern = InstantPattern.CreateWithInvariantCulture("uuuu-MM-dd'T'HH:mm:ss.fff'Z'");
-    private static readonly LocalDateTimePattern TtPattern = LocalDateTimePattern.CreateWithInvariantCulture("uuuu-MM-dd'T'HH:mm:ss.fff");
+    private static readonly double UnixEpochJulianDate = 2440587.5;
 
-    /// <summary>ISO 8601 UTC with millisecond precision and Z.</summary>
-    public static string Utc(Instant instant) => UtcPattern.Format(ToMillisecond(instant));
+    /// <summary>A UTC instant, e.g. 2025-03-14T06:58:00.000Z or -1999-06-26T13:00:00.000Z.</summary>
+    public static string Utc(Instant instant) => Write(instant.ToJulianDate(), "Z");
 
-    /// <summary>TT as an ISO 8601 local date-time (proleptic Gregorian, as ISO 8601 reckons), no zone.</summary>
-    public static string Tt(TtInstant tt) => TtPattern.Format(ToMillisecond(Instant.FromJulianDate(tt.JulianDate.Day)).InUtc().LocalDateTime);
+    /// <summary>A TT instant without a zone, e.g. 2025-03-14T06:59:09.184.</summary>
+    public static string Tt(TtInstant tt) => Write(tt.JulianDate.Day, "");
 
-    // A Julian date in a double resolves about 40 µs; round to the nearest millisecond so that 0h does not print as 23:59:59.999.
-    private static Instant ToMillisecond(Instant instant) =>
-        Instant.FromUnixTimeTicks((long)Math.Round(instant.ToUnixTimeTicks() / 10_000.0, MidpointRounding.AwayFromZero) * 10_000);
+    /// <summary>The calendar date (astronomers' calendar) of a UTC instant, YYYY-MM-DD.</summary>
+    public static string UtcDate(Instant instant) => Write(instant.ToJulianDate(), "")[..DateLength(instant.ToJulianDate())];
 
     /// <summary>A number rounded for display.</summary>
     public static double Round(double value, int digits) => Math.Round(value, digits, MidpointRounding.AwayFromZero);
 
-    /// <summary>Invariant-culture text of a number.</summary>
-    public static string Text(double value) => value.ToString("R", CultureInfo.InvariantCulture);
+    /// <summary>
+    /// Reads an ISO 8601 instant with Z or an offset (astronomers' calendar, optional minus sign on the year); false for
+    /// anything else, including dates that do not exist (1582-10-05 to 1582-10-14, February 30).
+    /// </summary>
+    public static bool TryParseInstant(string text, out Instant instant)
+    {
+        instant = default;
+        var m = InstantSyntax().Match(text.Trim());
+        if (!m.Success) return false;
+        if (!TryDate(m.Groups["date"].Value, out var date)) return false;
+        var hour = int.Parse(m.Groups["h"].Value, CultureInfo.InvariantCulture);
+        var minute = int.Parse(m.Groups["min"].Value, CultureInfo.InvariantCulture);
+        var second = m.Groups["s"].Success ? double.Parse(m.Groups["s"].Value, CultureInfo.InvariantCulture) : 0;
+        if (hour > 23 || minute > 59 || second >= 60) return false;
+        var offsetMinutes = 0;
+        if (m.Groups["zone"].Value != "Z")
+        {
+            var sign = m.Groups["zone"].Value[0] == '-' ? -1 : 1;
+            var oh = int.Parse(m.Groups["oh"].Value, CultureInfo.InvariantCulture);
+            var om = int.Parse(m.Groups["om"].Value, CultureInfo.InvariantCulture);
+            if (oh > 18 || om > 59) return false;
+            offsetMinutes = sign * (oh * 60 + om);
+        }
+        var jd = JulianDate.FromCalendar(date.Year, date.Month, date.Day, date.IsGregorian).Day
+            + (hour * 3600 + minute * 60 + second - offsetMinutes * 60) / 86400.0;
+        instant = FromJulianDate(jd);
+        return true;
+    }
+
+    /// <summary>Reads YYYY-MM-DD (astronomers' calendar, optional minus sign); false for dates that do not exist.</summary>
+    public static bool TryParseDate(string text, out CalendarDate date) => TryDate(text.Trim(), out date) & DateSyntax().IsMatch(text.Trim());
+
+    /// <summary>The instant of a Julian date of UTC, rounded to the millisecond.</summary>
+    public static Instant FromJulianDate(double jd) =>
+        Instant.FromUnixTimeMilliseconds((long)Math.Round((jd - UnixEpochJulianDate) * 86_400_000.0, MidpointRounding.AwayFromZero));
+
+    private static bool TryDate(string text, out CalendarDate date)
+    {
+        date = default;
+        var m = DateSyntax().Match(text.Length >= 10 && text.Contains('T', StringComparison.Ordinal) ? text[..text.IndexOf('T', StringComparison.Ordinal)] : text);
+        if (!m.Success) return false;
+        if (!int.TryParse(m.Groups["y"].Value, NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out var year)) return false;
+        var month = int.Parse(m.Groups["m"].Value, CultureInfo.InvariantCulture);
+        var day = int.Parse(m.Groups["d"].Value, CultureInfo.InvariantCulture);
+        if (month is < 1 or > 12 || day < 1) return false;
+        var gregorian = year > 1582 || (year == 1582 && (month > 10 || (month == 10 && day >= 15)));
+        if (year == 1582 && month == 10 && day is > 4 and < 15) return false;
+        var leap = gregorian ? (year % 4 == 0 && year % 100 != 0) || year % 400 == 0 : ((year % 4) + 4) % 4 == 0;
+        int[] lengths = [31, leap ? 29 : 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
+        if (day > lengths[month - 1]) return false;
+        date = new CalendarDate(year, month, day, gregorian);
+        return true;
+    }
+
+    private static string Write(double jd, string suffix)
+    {
+        // Round to the millisecond first, so that 0h never prints as 23:59:59.999 of the day before.
+        var milliseconds = Math.Round((jd + 0.5) * 86_400_000.0, MidpointRounding.AwayFromZero);
+        var dayStart = Math.Floor(milliseconds / 86_400_000.0);
+        var ofDay = (long)(milliseconds - dayStart * 86_400_000.0);
+        var date = new JulianDate(dayStart).ToCalendar(); // noon of that civil day: safe from rounding at midnight
+        return string.Create(CultureInfo.InvariantCulture,
+            $"{date.ToIsoDateString()}T{ofDay / 3_600_000:00}:{ofDay / 60_000 % 60:00}:{ofDay / 1000 % 60:00}.{ofDay % 1000:000}{suffix}");
+    }
+
+    private static int DateLength(double jd) => Write(jd, "").IndexOf('T', StringComparison.Ordinal);
+
+    [GeneratedRegex(@"^(?<y>-?\d{4,5})-(?<m>\d{2})-(?<d>\d{2})$", RegexOptions.CultureInvariant)]
+    private static partial Regex DateSyntax();
+
+    [GeneratedRegex(@"^(?<date>-?\d{4,5}-\d{2}-\d{2})T(?<h>\d{2}):(?<min>\d{2})(:(?<s>\d{2}(\.\d{1,9})?))?(?<zone>Z|[+-](?<oh>\d{2}):(?<om>\d{2}))$", RegexOptions.CultureInvariant)]
+    private static partial Regex InstantSyntax();
 }

@@ -1,3 +1,4 @@
+using LunarShadow.Api.Eclipses;
 using LunarShadow.Api.Ephemeris;
 using Serilog;
 
@@ -25,6 +26,7 @@ internal static class Pipeline
         });
         app.MapGet("/", () => Results.Redirect("/docs")).ExcludeFromDescription();
         app.MapEphemerisEndpoints();
+        app.MapEclipseEndpoints();
         return app;
     }
 }

@@ -8,6 +8,15 @@ internal static class Problems
     /// <summary>The problem type of every invalid-input response.</summary>
     public const string InvalidRequestType = "https://lunarshadow.invalid/problems/invalid-request";
 
+    /// <summary>404 with an explanation.</summary>
+    public static ProblemHttpResult NotFound(string detail) => TypedResults.Problem(
+        detail: detail, statusCode: StatusCodes.Status404NotFound, title: "Not found.", type: "https://lunarshadow.invalid/problems/not-found");
+
+    /// <summary>406 naming the representations on offer.</summary>
+    public static ProblemHttpResult NotAcceptable(IEnumerable<Formatting.OutputFormat> offered) => TypedResults.Problem(
+        detail: "This resource is available as " + string.Join(", ", offered.Select(Formatting.ContentNegotiation.MediaType)) + "; ask with Accept or ?format=.",
+        statusCode: StatusCodes.Status406NotAcceptable, title: "No acceptable representation.", type: "https://lunarshadow.invalid/problems/not-acceptable");
+
     /// <summary>400 listing every invalid field with the value given and the allowed range.</summary>
     public static ValidationProblem InvalidQuery(QueryReader reader) => TypedResults.ValidationProblem(
         reader.Errors,

@@ -1,6 +1,5 @@
 using System.Globalization;
 using NodaTime;
-using NodaTime.Text;
 
 namespace LunarShadow.Api.Validation;
 
@@ -51,20 +50,38 @@ internal sealed class QueryReader
             if (required) Fail(field, $"{field} is required: an ISO 8601 instant such as 2025-03-14T06:58:00Z, years {SupportedYears}.");
             return null;
         }
-        var parsed = OffsetDateTimePattern.ExtendedIso.Parse(raw.Trim());
-        if (!parsed.Success)
+        if (!Formatting.TimeFormats.TryParseInstant(raw, out var instant))
         {
-            Fail(field, $"{field} must be an ISO 8601 instant with Z or an offset, such as 2025-03-14T06:58:00Z, years {SupportedYears}; got '{Clip(raw)}'.");
+            Fail(field, $"{field} must be an ISO 8601 instant with Z or an offset, such as 2025-03-14T06:58:00Z, years {SupportedYears} (Julian calendar before 1582-10-15); got '{Clip(raw)}'.");
             return null;
         }
-        var instant = parsed.Value.ToInstant();
-        var year = instant.InUtc().Year;
-        if (year < Astronomy.Time.SupportedRange.FirstYear || year > Astronomy.Time.SupportedRange.LastYear)
+        if (!Astronomy.Time.SupportedRange.Contains(new Astronomy.Time.JulianDate(instant.ToJulianDate())))
         {
             Fail(field, $"{field} must lie in the years {SupportedYears}; got {Clip(raw)}.");
             return null;
         }
         return instant;
+    }
+
+    /// <summary>A calendar date YYYY-MM-DD (astronomers' calendar) within the supported years.</summary>
+    public Astronomy.Time.CalendarDate? Date(string field, string? raw, bool required = true)
+    {
+        if (string.IsNullOrWhiteSpace(raw))
+        {
+            if (required) Fail(field, $"{field} is required: a date YYYY-MM-DD, years {SupportedYears}.");
+            return null;
+        }
+        if (!Formatting.TimeFormats.TryParseDate(raw, out var date))
+        {
+            Fail(field, $"{field} must be a date YYYY-MM-DD that exists (Julian calendar before 1582-10-15, astronomical year numbering, e.g. -0584-05-28), years {SupportedYears}; got '{Clip(raw)}'.");
+            return null;
+        }
+        if (date.Year < Astronomy.Time.SupportedRange.FirstYear || date.Year > Astronomy.Time.SupportedRange.LastYear)
+        {
+            Fail(field, $"{field} must lie in the years {SupportedYears}; got {Clip(raw)}.");
+            return null;
+        }
+        return date;
     }
 
     /// <summary>One of a fixed set of names (case-insensitive); null when absent.</summary>

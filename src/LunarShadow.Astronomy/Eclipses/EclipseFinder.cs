@@ -37,9 +37,21 @@ public sealed class EclipseFinder
         _screening = screening;
     }
 
+    // Layer heights are the caller's choice; keep the finders (and their caches) of at most this many at once.
+    private const int MaxLayerFinders = 8;
+
     /// <summary>The shared finder for a model, on the embedded ephemerides.</summary>
-    public static EclipseFinder For(ShadowModel model) => Finders.GetOrAdd(model, m =>
-        new EclipseFinder(m, ApparentPlaceCalculator.Default, new ApparentPlaceCalculator(LunarTheory.Screening, EarthOrbitTheory.Screening)));
+    public static EclipseFinder For(ShadowModel model)
+    {
+        if (Finders.TryGetValue(model, out var known)) return known;
+        if (model.Kind == ShadowModelKind.Layer && Finders.Keys.Count(k => k.Kind == ShadowModelKind.Layer) >= MaxLayerFinders)
+        {
+            foreach (var stale in Finders.Keys.Where(k => k.Kind == ShadowModelKind.Layer && k.LayerHeightKm != ShadowModel.DefaultLayerHeightKm))
+                Finders.TryRemove(stale, out _);
+        }
+        return Finders.GetOrAdd(model, m =>
+            new EclipseFinder(m, ApparentPlaceCalculator.Default, new ApparentPlaceCalculator(LunarTheory.Screening, EarthOrbitTheory.Screening)));
+    }
 
     /// <summary>The shadow model.</summary>
     public ShadowModel Model { get; }

@@ -1,0 +1,141 @@
+using System.ComponentModel;
+using LunarShadow.Api.Formatting;
+using LunarShadow.Api.Validation;
+using LunarShadow.Astronomy.Eclipses;
+using LunarShadow.Astronomy.Embedded;
+using LunarShadow.Astronomy.Shadow;
+using LunarShadow.Astronomy.Time;
+
+namespace LunarShadow.Api.Eclipses;
+
+/// <summary>GET /api/v1/eclipses and /api/v1/eclipses/{date}: global circumstances.</summary>
+internal static class EclipseEndpoints
+{
+    /// <summary>Longest range one list request may span, in years.</summary>
+    public const int MaxYearsPerRequest = 1000;
+
+    private static readonly OutputFormat[] Formats = [OutputFormat.Json, OutputFormat.Csv];
+
+    public static IEndpointRouteBuilder MapEclipseEndpoints(this IEndpointRouteBuilder routes)
+    {
+        var group = routes.MapGroup("/api/v1/eclipses").WithTags("Eclipses");
+        group.MapGet("/", List)
+            .WithName("ListEclipses")
+            .WithSummary("Every lunar eclipse in a date range")
+            .WithDescription("Global circumstances of each lunar eclipse whose greatest phase falls between from and to (inclusive, UTC dates, at most 1000 years apart). JSON by default; CSV with Accept: text/csv or format=csv.")
+            .Produces<EclipseListResponse>(StatusCodes.Status200OK, "application/json", "text/csv")
+            .ProducesValidationProblem()
+            .ProducesProblem(StatusCodes.Status406NotAcceptable);
+        group.MapGet("/{date}", One)
+            .WithName("GetEclipse")
+            .WithSummary("One lunar eclipse in full, by the UTC date of its greatest phase")
+            .WithDescription("The eclipse whose greatest phase falls on the given UTC date (YYYY-MM-DD; Julian calendar before 1582-10-15, astronomical year numbering). 404 when there is none.")
+            .Produces<EclipseResponse>(StatusCodes.Status200OK, "application/json", "text/csv")
+            .ProducesValidationProblem()
+            .ProducesProblem(StatusCodes.Status404NotFound)
+            .ProducesProblem(StatusCodes.Status406NotAcceptable);
+        return routes;
+    }
+
+    internal static IResult List(
+        HttpRequest request,
+        [Description("First UTC date, YYYY-MM-DD (Julian calendar before 1582-10-15; e.g. -0584-05-01), years −1999 to +3000.")] string? from,
+        [Description("Last UTC date (inclusive), YYYY-MM-DD, at most 1000 years after from.")] string? to,
+        [Description("Comma-separated kinds to keep: total, partial, penumbral (default: all).")] string? kind,
+        [Description(ShadowQuery.ShadowDescription)] string? shadow,
+        [Description(ShadowQuery.LayerDescription)] string? layerKm,
+        [Description(DeltaTQuery.DeltaTDescription)] string? deltaT,
+        [Description(DeltaTQuery.ModelDescription)] string? deltaTModel,
+        [Description("Response format: json (default) or csv; overrides the Accept header.")] string? format)
+    {
+        var reader = new QueryReader();
+        var first = reader.Date("from", from);
+        var last = reader.Date("to", to);
+        var kinds = ReadKinds(reader, kind);
+        var model = ShadowQuery.Read(reader, shadow, layerKm);
+        var deltaTModelChoice = DeltaTQuery.Read(reader, deltaT, deltaTModel);
+        var output = ContentNegotiation.Choose(request, format, Formats, reader);
+        if (first is { } f && last is { } l)
+        {
+            var span = DayOf(l) - DayOf(f);
+            if (span < 0) reader.Fail("to", $"to must not be before from; got from={from}, to={to}.");
+            else if (span > MaxYearsPerRequest * 365.25 + 1) reader.Fail("to", $"A request may span at most {MaxYearsPerRequest} years; from={from} to {to} spans {span / 365.25:0} years.");
+        }
+        if (!reader.IsValid || first is null || last is null) return Problems.InvalidQuery(reader);
+        if (output is null) return Problems.NotAcceptable(Formats);
+
+        var time = new TimeScaleConverter(deltaTModelChoice);
+        var eclipses = InDateRange(model, time, DayOf(first.Value), DayOf(last.Value) + 1)
+            .Where(e => kinds.Contains(e.Kind))
+            .Select(e => EclipseMapping.ToResponse(e, time))
+            .ToList();
+        if (output == OutputFormat.Csv) return Results.Text(EclipseMapping.Csv(eclipses), ContentNegotiation.MediaType(OutputFormat.Csv));
+        return TypedResults.Ok(new EclipseListResponse(model.Name, LayerKm(model), deltaTModelChoice.Name, from!.Trim(), to!.Trim(),
+            eclipses.Count, eclipses, EmbeddedDataSet.VersionTag));
+    }
+
+    internal static IResult One(
+        HttpRequest request,
+        [Description("UTC date of greatest eclipse, YYYY-MM-DD (Julian calendar before 1582-10-15).")] string date,
+        [Description(ShadowQuery.ShadowDescription)] string? shadow,
+        [Description(ShadowQuery.LayerDescription)] string? layerKm,
+        [Description(DeltaTQuery.DeltaTDescription)] string? deltaT,
+        [Description(DeltaTQuery.ModelDescription)] string? deltaTModel,
+        [Description("Response format: json (default) or csv; overrides the Accept header.")] string? format)
+    {
+        var reader = new QueryReader();
+        var day = reader.Date("date", date);
+        var model = ShadowQuery.Read(reader, shadow, layerKm);
+        var deltaTModelChoice = DeltaTQuery.Read(reader, deltaT, deltaTModel);
+        var output = ContentNegotiation.Choose(request, format, Formats, reader);
+        if (!reader.IsValid || day is null) return Problems.InvalidQuery(reader);
+        if (output is null) return Problems.NotAcceptable(Formats);
+
+        var time = new TimeScaleConverter(deltaTModelChoice);
+        var start = DayOf(day.Value);
+        var eclipse = InDateRange(model, time, start, start + 1).FirstOrDefault();
+        if (eclipse is null)
+            return Problems.NotFound($"No lunar eclipse has its greatest phase on {date} (UTC) under the {model.Name} shadow model. List nearby eclipses with /api/v1/eclipses?from=…&to=….");
+        var response = EclipseMapping.ToResponse(eclipse, time);
+        return output == OutputFormat.Csv
+            ? Results.Text(EclipseMapping.Csv([response]), ContentNegotiation.MediaType(OutputFormat.Csv))
+            : TypedResults.Ok(response);
+    }
+
+    /// <summary>Eclipses whose greatest phase falls in [startDay, endDay) of UTC (Julian dates of 0h UTC).</summary>
+    internal static IEnumerable<LunarEclipse> InDateRange(ShadowModel model, TimeScaleConverter time, double startDay, double endDay)
+    {
+        // ΔT reaches about 13 hours at the ends of the span; search a day beyond each end, then keep by UTC.
+        var from = TtInstant.FromJulianDate(startDay - 1);
+        var to = TtInstant.FromJulianDate(endDay + 1);
+        foreach (var e in EclipseFinder.For(model).Between(from, to))
+        {
+            var utc = time.ToUtc(e.GreatestEclipse).ToJulianDate();
+            if (utc >= startDay && utc < endDay) yield return e;
+        }
+    }
+
+    private static double DayOf(CalendarDate date) => JulianDate.FromCalendar(date.Year, date.Month, date.Day, date.IsGregorian).Day;
+
+    private static double? LayerKm(ShadowModel model) => model.Kind == ShadowModelKind.Layer ? model.LayerHeightKm : null;
+
+    private static HashSet<EclipseKind> ReadKinds(QueryReader reader, string? kind)
+    {
+        var all = new HashSet<EclipseKind> { EclipseKind.Penumbral, EclipseKind.Partial, EclipseKind.Total };
+        if (string.IsNullOrWhiteSpace(kind)) return all;
+        var chosen = new HashSet<EclipseKind>();
+        foreach (var part in kind.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries))
+        {
+            switch (part.ToLowerInvariant())
+            {
+                case "total": chosen.Add(EclipseKind.Total); break;
+                case "partial": chosen.Add(EclipseKind.Partial); break;
+                case "penumbral": chosen.Add(EclipseKind.Penumbral); break;
+                default:
+                    reader.Fail("kind", $"kind must be a comma-separated list of total, partial, penumbral; got '{part}'.");
+                    break;
+            }
+        }
+        return chosen.Count == 0 ? all : chosen;
+    }
+}

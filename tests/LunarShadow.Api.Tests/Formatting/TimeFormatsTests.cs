@@ -1,0 +1,59 @@
+using LunarShadow.Api.Formatting;
+using LunarShadow.Astronomy.Time;
+using NodaTime;
+
+namespace LunarShadow.Api.Tests.Formatting;
+
+public class TimeFormatsTests
+{
+    // Meeus (1998), ch. 7: JD 2299160.5 is 1582 October 15 (Gregorian), the day after 1582 October 4 (Julian).
+    [Fact]
+    public void The_calendar_switches_from_julian_to_gregorian_in_October_1582()
+    {
+        Assert.Equal("1582-10-15T00:00:00.000Z", TimeFormats.Utc(TimeFormats.FromJulianDate(2299160.5)));
+        Assert.Equal("1582-10-04T00:00:00.000Z", TimeFormats.Utc(TimeFormats.FromJulianDate(2299159.5)));
+    }
+
+    // Meeus (1998), Example 7.c: JD 1507900.13 is −584 May 28.63 (Julian calendar).
+    [Fact]
+    public void Negative_years_are_written_in_astronomical_numbering()
+    {
+        Assert.StartsWith("-0584-05-28T15:07", TimeFormats.Tt(TtInstant.FromJulianDate(1507900.13)), StringComparison.Ordinal);
+    }
+
+    [Theory]
+    [InlineData("2025-03-14T06:58:00Z", 2460748.7902777777)]
+    [InlineData("2025-03-14T07:58:00+01:00", 2460748.7902777777)]
+    [InlineData("-0584-05-28T15:07:12Z", 1507900.13)]
+    [InlineData("1582-10-04T12:00:00Z", 2299160.0)]
+    public void Instants_are_read_in_the_astronomers_calendar(string text, double julianDate)
+    {
+        Assert.True(TimeFormats.TryParseInstant(text, out var instant));
+        Assert.Equal(julianDate, instant.ToJulianDate(), 6);
+    }
+
+    [Theory]
+    [InlineData("1582-10-10T00:00:00Z")]
+    [InlineData("2025-02-29T00:00:00Z")]
+    [InlineData("2025-03-14T24:00:00Z")]
+    [InlineData("2025-03-14T06:58:00")]
+    [InlineData("2025-03-14 06:58:00Z")]
+    public void Impossible_or_zoneless_instants_are_refused(string text)
+    {
+        Assert.False(TimeFormats.TryParseInstant(text, out _));
+    }
+
+    [Fact]
+    public void Round_trip_through_text_keeps_the_millisecond()
+    {
+        var random = new Random(7);
+        for (var i = 0; i < 500; i++)
+        {
+            var jd = SupportedRange.Start.Day + random.NextDouble() * (SupportedRange.End.Day - SupportedRange.Start.Day);
+            var instant = TimeFormats.FromJulianDate(jd);
+            Assert.True(TimeFormats.TryParseInstant(TimeFormats.Utc(instant), out var back));
+            Assert.Equal(instant, back);
+        }
+        Assert.Equal(Instant.FromUtc(2000, 1, 1, 12, 0), TimeFormats.FromJulianDate(2451545.0));
+    }
+}
