@@ -1,5 +1,11 @@
 using BenchmarkDotNet.Running;
+using LunarShadow.Benchmarks;
 
-// Run all: dotnet run -c Release --project tests/LunarShadow.Benchmarks -- --filter '*'
-// One:     dotnet run -c Release --project tests/LunarShadow.Benchmarks -- --filter '*ApparentPlace*'
+// Micro-benchmarks:  dotnet run -c Release --project tests/LunarShadow.Benchmarks -- --filter '*'   (add --job short)
+// Eclipse search:    dotnet run -c Release --project tests/LunarShadow.Benchmarks -- span
+if (args is ["span", ..])
+{
+    EclipseSpanTiming.Run();
+    return;
+}
 BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);

@@ -18,7 +18,7 @@ public sealed class ShadowPassage
     public const double DefaultHalfWidthHours = 5.0;
 
     /// <summary>Default number of ephemeris samples.</summary>
-    public const int DefaultNodeCount = 9;
+    public const int DefaultNodeCount = 7;
 
     private readonly ChebyshevSeries _xi, _eta, _moonDistance, _sunDistance, _axisDeclination, _moonX, _moonY, _moonZ;
 
