@@ -1,3 +1,4 @@
+using System.Text.Json.Serialization;
 using Serilog;
 
 namespace LunarShadow.Api.Hosting;
@@ -12,6 +13,8 @@ internal static class ServiceRegistration
             .ReadFrom.Services(services)
             .Enrich.FromLogContext());
         builder.Services.AddProblemDetails();
+        // Numbers are written and read as JSON numbers only, so the OpenAPI schema shows them as such.
+        builder.Services.ConfigureHttpJsonOptions(options => options.SerializerOptions.NumberHandling = JsonNumberHandling.Strict);
         builder.Services.AddOpenApi("v1", options => options.AddDocumentTransformer((document, _, _) =>
         {
             document.Info.Title = "LunarShadow";
