@@ -32,6 +32,11 @@ public sealed record LunarEclipse(
     ShadowModel Model,
     ShadowPassage Passage)
 {
+    private EclipseNightSky? _nightSky;
+
+    /// <summary>The Moon and Sun over the eclipse night, fitted on first use and kept with the eclipse.</summary>
+    public EclipseNightSky NightSky => _nightSky ??= EclipseNightSky.Compute(Frames.ApparentPlaceCalculator.Default, GreatestEclipse);
+
     /// <summary>The contact of the given name, or null when it does not occur.</summary>
     public EclipseContact? Contact(ContactName name) => Contacts.FirstOrDefault(c => c.Name == name);
 }

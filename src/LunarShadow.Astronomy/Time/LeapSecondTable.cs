@@ -38,13 +38,15 @@ public static class LeapSecondTable
     public static int TaiMinusUtcSeconds(Instant utc)
     {
         if (!Covers(utc)) throw new ArgumentOutOfRangeException(nameof(utc), utc, "The leap-second table covers 1972-01-01 until its announced horizon only.");
-        var result = Steps[0].TaiMinusUtcSeconds;
-        foreach (var (from, offset) in Steps)
+        var lo = 0;
+        var hi = Steps.Length - 1;
+        while (lo < hi)
         {
-            if (utc < from) break;
-            result = offset;
+            var mid = (lo + hi + 1) / 2;
+            if (Steps[mid].From <= utc) lo = mid;
+            else hi = mid - 1;
         }
-        return result;
+        return Steps[lo].TaiMinusUtcSeconds;
     }
 
     private static Instant Utc(int year, int month, int day) => Instant.FromUtc(year, month, day, 0, 0);

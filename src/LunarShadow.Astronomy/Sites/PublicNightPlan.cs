@@ -1,0 +1,18 @@
+using LunarShadow.Astronomy.Units;
+using NodaTime;
+
+namespace LunarShadow.Astronomy.Sites;
+
+/// <summary>What an observatory with set opening hours can show of one eclipse.</summary>
+/// <param name="Window">The opening used: the one that overlaps the visible eclipse most.</param>
+/// <param name="PhasesInWindow">The visible stretches of each phase inside the opening.</param>
+/// <param name="Session">A suggested public session, or null when nothing worth showing falls in the opening.</param>
+/// <param name="Note">One plain line about the plan.</param>
+public sealed record PublicNightPlan(OpeningWindow Window, IReadOnlyList<VisibleSpan> PhasesInWindow, SuggestedSession? Session, string Note);
+
+/// <summary>A suggested public session.</summary>
+/// <param name="DoorsOpen">Doors open.</param>
+/// <param name="DoorsClose">Doors close.</param>
+/// <param name="MoonAltitudeAtOpen">The Moon's apparent altitude when the doors open.</param>
+/// <param name="MoonAltitudeAtClose">The Moon's apparent altitude when they close.</param>
+public sealed record SuggestedSession(Instant DoorsOpen, Instant DoorsClose, Angle MoonAltitudeAtOpen, Angle MoonAltitudeAtClose);

@@ -1,0 +1,83 @@
+using LunarShadow.Astronomy.Eclipses;
+using LunarShadow.Astronomy.Time;
+using LunarShadow.Astronomy.Units;
+
+namespace LunarShadow.Astronomy.Sites;
+
+/// <summary>What a site asks of the eclipses it wants listed.</summary>
+/// <param name="MinimumPhase">At least this phase must be visible (partial includes total).</param>
+/// <param name="AstronomicalNightOnly">Only count the part seen with the Sun more than 18° below the horizon.</param>
+/// <param name="MinimumMoonAltitude">Only count the part with the Moon's upper limb at least this high.</param>
+/// <param name="Hours">Only count the part inside these opening hours.</param>
+public sealed record UpcomingCriteria(
+    EclipsePhase MinimumPhase = EclipsePhase.Penumbral,
+    bool AstronomicalNightOnly = false,
+    Angle? MinimumMoonAltitude = null,
+    OpeningHours? Hours = null);
+
+/// <summary>An eclipse a site can see, with the stretches that met the criteria.</summary>
+/// <param name="Local">Its local circumstances.</param>
+/// <param name="Qualifying">The stretches of the chosen phase that meet every criterion.</param>
+public sealed record UpcomingEclipse(LocalCircumstances Local, IReadOnlyList<VisibleSpan> Qualifying)
+{
+    /// <summary>Minutes that meet the criteria.</summary>
+    public double QualifyingMinutes => Qualifying.Sum(q => q.Minutes);
+}
+
+/// <summary>The next eclipses a site can see, by its own criteria.</summary>
+public static class UpcomingEclipses
+{
+    /// <summary>The longest look-ahead, in years.</summary>
+    public const int MaxYearsAhead = 1000;
+
+    private static readonly Angle AstronomicalNightSun = Angle.FromDegrees(-18);
+
+    /// <summary>Eclipses from <paramref name="from"/> on that the site can see, lazily, in time order.</summary>
+    public static IEnumerable<UpcomingEclipse> From(EclipseFinder finder, Site site, TimeScaleConverter time, TtInstant from, UpcomingCriteria criteria)
+    {
+        var effectiveSite = criteria.MinimumMoonAltitude is { } min && min > site.MinimumAltitude ? site with { MinimumAltitude = min } : site;
+        var end = TtInstant.FromJulianDate(Math.Min(from.JulianDate.Day + MaxYearsAhead * 365.25, SupportedRange.End.Day - 1));
+        foreach (var eclipse in finder.Between(from, end))
+        {
+            var local = LocalCircumstancesCalculator.Compute(eclipse, effectiveSite, time);
+            var spans = local.VisiblePhases.Where(p => p.Phase == criteria.MinimumPhase).ToList();
+            if (spans.Count == 0) continue;
+            if (criteria.AstronomicalNightOnly) spans = WithinAstronomicalNight(local, spans);
+            if (criteria.Hours is not null) spans = PublicNightPlanner.Plan(local, criteria.Hours, time).PhasesInWindow.Where(p => p.Phase == criteria.MinimumPhase).ToList();
+            if (criteria.AstronomicalNightOnly && criteria.Hours is not null) spans = WithinAstronomicalNight(local, spans);
+            if (spans.Sum(s => s.Minutes) > 0) yield return new UpcomingEclipse(local, spans);
+        }
+    }
+
+    private static List<VisibleSpan> WithinAstronomicalNight(LocalCircumstances local, List<VisibleSpan> spans)
+    {
+        var eclipse = local.Eclipse;
+        var sky = new LocalSky(eclipse.NightSky, local.Site, local.DeltaTSeconds);
+        var night = eclipse.NightSky;
+        const double w = EclipseNightSky.HalfWidthHours - 0.5;
+        var scan = new AltitudeCrossings(h => (AstronomicalNightSun.Radians - sky.SunAltitudeAt(h).Radians, 0), -w, w);
+        double Dark(double value, double _) => value;
+        var dark = scan.PositiveSpans(Dark, scan.Find(Dark, HorizonProfile.Flat));
+        var result = new List<VisibleSpan>();
+        foreach (var span in spans)
+        {
+            var (a, b) = (night.HoursFromCenter(span.StartTt), night.HoursFromCenter(span.EndTt));
+            foreach (var (s, e) in dark)
+            {
+                var from = Math.Max(a, s);
+                var to = Math.Min(b, e);
+                if (to <= from) continue;
+                var fromTt = from == a ? span.StartTt : night.InstantAt(from);
+                var toTt = to == b ? span.EndTt : night.InstantAt(to);
+                result.Add(span with
+                {
+                    StartTt = fromTt,
+                    EndTt = toTt,
+                    StartUtc = span.StartUtc.PlusTicks((long)Math.Round(fromTt.SecondsSince(span.StartTt) * 1e7)),
+                    EndUtc = span.EndUtc.PlusTicks((long)Math.Round(toTt.SecondsSince(span.EndTt) * 1e7)),
+                });
+            }
+        }
+        return result;
+    }
+}

@@ -1,0 +1,97 @@
+using LunarShadow.Astronomy.Frames;
+using LunarShadow.Astronomy.Sites;
+using LunarShadow.Astronomy.Tests.Eclipses;
+using LunarShadow.Astronomy.Time;
+using LunarShadow.Astronomy.Units;
+
+namespace LunarShadow.Astronomy.Tests.Sites;
+
+public class MoonRiseSetTests
+{
+    // Meeus (1998), Example 15.a: Venus at Boston (φ = +42°20′, L = 71°05′ W) on 1988 March 20, from his tabulated
+    // α, δ for March 19–21 (interpolated as in his ch. 3), Θ₀ = 177.74208°, ΔT = 56 s, h₀ = −0°34′:
+    // rising 12:25:26 UT (m = 0.51766), setting 02:54:40 UT (m = 0.12130).
+    [Fact]
+    public void Rising_and_setting_match_Meeus_example_15a()
+    {
+        double[] alpha = [40.68021, 41.73129, 42.78204], delta = [18.04761, 18.44092, 18.82742];
+        double Interpolate(double[] y, double n) =>
+            y[1] + n / 2 * ((y[1] - y[0]) + (y[2] - y[1]) + n * ((y[2] - y[1]) - (y[1] - y[0])));
+        var latitude = Angle.FromDegrees(42.3333);
+        (double, double) Venus(double hours)
+        {
+            var days = hours / 24;
+            var n = days + 56.0 / 86400;
+            var theta = 177.74208 + 360.985647 * days;
+            var hourAngle = Angle.FromDegrees(theta - 71.0833 - Interpolate(alpha, n));
+            var h = HorizontalCoordinates.FromHourAngle(hourAngle, Angle.FromDegrees(Interpolate(delta, n)), latitude);
+            return (h.Altitude.Radians - Angle.FromDegrees(-0.5667).Radians, h.Azimuth.Radians);
+        }
+        var crossings = new AltitudeCrossings(Venus, 0, 24).Find((limb, _) => limb, HorizonProfile.Flat);
+        var rise = crossings.Single(c => c.Rising).Hours;
+        var set = crossings.Single(c => !c.Rising).Hours;
+        Assert.Equal(0.51766 * 24, rise, 1.0 / 60);
+        Assert.Equal(0.12130 * 24, set, 1.0 / 60);
+    }
+
+    // astronomy-engine@2.1.19 (npm, MIT), SearchRiseSet for the Moon, printed by tools/reference-values/moon-rise-set.mjs;
+    // sea-level sites at four latitudes. Its refraction and ΔT differ slightly from ours, hence 15 s.
+    [Theory]
+    [InlineData(51.5, -0.12, 2025, 3, 14, "2025-03-14T06:22:55Z", "2025-03-14T18:29:51.742Z")]
+    [InlineData(-33.87, 151.2, 2025, 3, 14, null, "2025-03-14T08:13:49.973Z")]
+    [InlineData(40.71, -74.0, 2025, 3, 14, "2025-03-14T11:17:51.680Z", "2025-03-13T22:36:28.737Z")]
+    [InlineData(69.65, 18.96, 2025, 3, 14, "2025-03-14T05:23:29.757Z", "2025-03-14T17:08:56.153Z")]
+    [InlineData(0.0, 0.0, 2022, 11, 8, "2022-11-08T05:32:32.816Z", "2022-11-08T17:57:08.698Z")]
+    [InlineData(-45.0, 170.0, 2022, 11, 8, "2022-11-08T17:18:28.523Z", "2022-11-08T07:24:28.250Z")]
+    public void Moonrise_and_moonset_agree_with_a_reference_library(double lat, double lon, int y, int m, int d, string? set, string? rise)
+    {
+        var eclipse = EclipseOnDate.Find(y, m, d);
+        var local = LocalCircumstancesCalculator.Compute(eclipse, Site.At(lat, lon), TimeScaleConverter.Default);
+        void Check(MoonEventType type, string? expected)
+        {
+            if (expected is null) return;
+            var instant = NodaTime.Text.InstantPattern.ExtendedIso.Parse(expected).Value;
+            var nearest = local.MoonEvents.Where(e => e.Type == type).MinBy(e => Math.Abs((e.Utc - instant).TotalSeconds));
+            Assert.NotNull(nearest);
+            Assert.True(Math.Abs((nearest!.Utc - instant).TotalSeconds) < 15, $"{type}: {nearest.Utc} vs {instant}");
+        }
+        Check(MoonEventType.Set, set);
+        Check(MoonEventType.Rise, rise);
+    }
+
+    // Common practice: above the Arctic Circle near a midsummer full Moon the Moon never rises (the full Moon stands
+    // opposite the Sun, low in the southern sky in June). The canon's 2011 June 15 total eclipse, seen from 78° N.
+    [Fact]
+    public void A_moon_that_never_rises_is_reported_as_such()
+    {
+        var local = LocalCircumstancesCalculator.Compute(EclipseOnDate.Find(2011, 6, 15), Site.At(78.2, 15.6), TimeScaleConverter.Default);
+        Assert.Equal(MoonHorizonState.DownThroughout, local.HorizonState);
+        Assert.Empty(local.MoonEvents);
+        Assert.False(local.AnyVisible);
+        Assert.StartsWith("Not visible", local.Summary, StringComparison.Ordinal);
+    }
+
+    // Common practice: in the Arctic near a midwinter full Moon the Moon stays up all day. 2010 December 21 total eclipse
+    // (Five Millennium Canon), seen from 78° N.
+    [Fact]
+    public void A_moon_that_never_sets_is_reported_as_such()
+    {
+        var local = LocalCircumstancesCalculator.Compute(EclipseOnDate.Find(2010, 12, 21), Site.At(78.2, 15.6), TimeScaleConverter.Default);
+        Assert.Equal(MoonHorizonState.UpThroughout, local.HorizonState);
+        Assert.Single(local.VisiblePhases, p => p.Phase == EclipsePhase.Total);
+    }
+
+    // Common practice (e.g. the nautical almanacs): an observer 100 m up sees the sea horizon 17.6′ lower, so the Moon
+    // rises earlier there than at sea level, by some tens of seconds at mid-latitudes.
+    [Fact]
+    public void Height_lowers_the_horizon_and_brings_moonrise_earlier()
+    {
+        var eclipse = EclipseOnDate.Find(2025, 3, 14);
+        var sea = LocalCircumstancesCalculator.Compute(eclipse, Site.At(-33.87, 151.2, 0), TimeScaleConverter.Default);
+        var hill = LocalCircumstancesCalculator.Compute(eclipse, Site.At(-33.87, 151.2, 100), TimeScaleConverter.Default);
+        Assert.Equal(17.6, Site.At(0, 0, 100).HorizonDip.Degrees * 60, 0.1);
+        var seaRise = sea.MoonEvents.First(e => e.Type == MoonEventType.Rise).Utc;
+        var hillRise = hill.MoonEvents.First(e => e.Type == MoonEventType.Rise).Utc;
+        Assert.InRange((seaRise - hillRise).TotalSeconds, 30, 300);
+    }
+}
