@@ -24,7 +24,7 @@ internal static class EphemerisEndpoints
 
     internal static Results<Ok<EphemerisResponse>, ValidationProblem> Get(
         [Description("The instant, ISO 8601 with Z or an offset, years −1999 to +3000 (e.g. 2025-03-14T06:58:00Z).")] string? utc,
-        [Description(SiteQuery.LatitudeDescription)] string? lat,
+        [Description(SiteQuery.LatitudeDescription + " Give with lon for topocentric places.")] string? lat,
         [Description(SiteQuery.LongitudeDescription)] string? lon,
         [Description(SiteQuery.ElevationDescription)] string? elevation,
         [Description(SiteQuery.PressureDescription)] string? pressure,
@@ -34,7 +34,7 @@ internal static class EphemerisEndpoints
     {
         var reader = new QueryReader();
         var instant = reader.Instant("utc", utc);
-        var site = SiteQuery.Read(reader, lat, lon, elevation, pressure, temperature);
+        var site = SiteQuery.Read(reader, new SiteFields(lat, lon, elevation, Pressure: pressure, Temperature: temperature), required: false);
         var model = DeltaTQuery.Read(reader, deltaT, deltaTModel);
         if (!reader.IsValid || instant is null) return Problems.InvalidQuery(reader);
 
@@ -44,7 +44,7 @@ internal static class EphemerisEndpoints
         var deltaTValue = converter.DeltaTAt(tt);
         var sky = ApparentPlaceCalculator.Default.Geocentric(tt, ut1);
         TopocentricPlace? Topocentric(ApparentPlace body) =>
-            site is { } s ? ApparentPlaceCalculator.Topocentric(body, sky.GreenwichApparentSiderealTime, s.Location, s.Air) : null;
+            site is not null ? ApparentPlaceCalculator.Topocentric(body, sky.GreenwichApparentSiderealTime, site.Location, site.Air) : null;
 
         return TypedResults.Ok(new EphemerisResponse(
             TimeFormats.Utc(instant.Value),

@@ -20,6 +20,23 @@ internal static partial class TimeFormats
     /// <summary>A TT instant without a zone, e.g. 2025-03-14T06:59:09.184.</summary>
     public static string Tt(TtInstant tt) => Write(tt.JulianDate.Day, "");
 
+    /// <summary>
+    /// A local time with its UTC offset, e.g. 2025-03-13T23:57:28.572-04:00, and a note when the local clock reading is
+    /// ambiguous because the clocks go back around it.
+    /// </summary>
+    public static (string Text, string? Note) Local(Instant instant, DateTimeZone zone)
+    {
+        var offset = zone.GetUtcOffset(instant);
+        var seconds = offset.Seconds;
+        var sign = seconds < 0 ? '-' : '+';
+        var abs = Math.Abs(seconds);
+        var text = Write(instant.ToJulianDate() + seconds / 86400.0, string.Create(CultureInfo.InvariantCulture, $"{sign}{abs / 3600:00}:{abs / 60 % 60:00}"));
+        string? note = null;
+        if (zone != DateTimeZone.Utc && zone.MapLocal(instant.InZone(zone).LocalDateTime).Count > 1)
+            note = string.Create(CultureInfo.InvariantCulture, $"This local time occurs twice (clocks go back); the one at UTC{sign}{abs / 3600:00}:{abs / 60 % 60:00} is meant.");
+        return (text, note);
+    }
+
     /// <summary>The calendar date (astronomers' calendar) of a UTC instant, YYYY-MM-DD.</summary>
     public static string UtcDate(Instant instant) => Write(instant.ToJulianDate(), "")[..DateLength(instant.ToJulianDate())];
 

@@ -1,5 +1,6 @@
 using LunarShadow.Api.Eclipses;
 using LunarShadow.Api.Ephemeris;
+using LunarShadow.Api.Sites;
 using Serilog;
 
 namespace LunarShadow.Api.Hosting;
@@ -27,6 +28,8 @@ internal static class Pipeline
         app.MapGet("/", () => Results.Redirect("/docs")).ExcludeFromDescription();
         app.MapEphemerisEndpoints();
         app.MapEclipseEndpoints();
+        app.MapLocalEndpoints();
+        app.MapUpcomingEndpoints();
         return app;
     }
 }

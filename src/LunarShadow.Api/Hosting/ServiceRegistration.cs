@@ -12,6 +12,7 @@ internal static class ServiceRegistration
             .ReadFrom.Configuration(builder.Configuration)
             .ReadFrom.Services(services)
             .Enrich.FromLogContext());
+        builder.Services.AddSingleton<NodaTime.IClock>(NodaTime.SystemClock.Instance);
         builder.Services.AddProblemDetails();
         // Numbers are written and read as JSON numbers only, so the OpenAPI schema shows them as such.
         builder.Services.ConfigureHttpJsonOptions(options => options.SerializerOptions.NumberHandling = JsonNumberHandling.Strict);

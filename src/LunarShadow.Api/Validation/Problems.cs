@@ -17,6 +17,14 @@ internal static class Problems
         detail: "This resource is available as " + string.Join(", ", offered.Select(Formatting.ContentNegotiation.MediaType)) + "; ask with Accept or ?format=.",
         statusCode: StatusCodes.Status406NotAcceptable, title: "No acceptable representation.", type: "https://lunarshadow.invalid/problems/not-acceptable");
 
+    /// <summary>413 for a body or batch over the limit.</summary>
+    public static ProblemHttpResult TooLarge(string detail) => TypedResults.Problem(
+        detail: detail, statusCode: StatusCodes.Status413PayloadTooLarge, title: "Request too large.", type: "https://lunarshadow.invalid/problems/too-large");
+
+    /// <summary>415 for a body that is not JSON.</summary>
+    public static ProblemHttpResult UnsupportedMediaType(string detail) => TypedResults.Problem(
+        detail: detail, statusCode: StatusCodes.Status415UnsupportedMediaType, title: "Unsupported media type.", type: "https://lunarshadow.invalid/problems/unsupported-media-type");
+
     /// <summary>400 listing every invalid field with the value given and the allowed range.</summary>
     public static ValidationProblem InvalidQuery(QueryReader reader) => TypedResults.ValidationProblem(
         reader.Errors,

@@ -1,0 +1,125 @@
+using System.ComponentModel;
+using System.Text.Json;
+using LunarShadow.Api.Eclipses;
+using LunarShadow.Api.Formatting;
+using LunarShadow.Api.Validation;
+using LunarShadow.Astronomy.Eclipses;
+using LunarShadow.Astronomy.Sites;
+using LunarShadow.Astronomy.Time;
+
+namespace LunarShadow.Api.Sites;
+
+/// <summary>GET and POST /api/v1/eclipses/{date}/local: what one site, or many, sees of an eclipse.</summary>
+internal static class LocalEndpoints
+{
+    /// <summary>Most sites in one batch request.</summary>
+    public const int MaxSitesPerBatch = 500;
+
+    /// <summary>Largest batch body accepted, bytes.</summary>
+    public const int MaxBatchBodyBytes = 1024 * 1024;
+
+    private static readonly OutputFormat[] SingleFormats = [OutputFormat.Json, OutputFormat.Csv, OutputFormat.Calendar];
+    private static readonly OutputFormat[] BatchFormats = [OutputFormat.Json, OutputFormat.Csv];
+
+    public static IEndpointRouteBuilder MapLocalEndpoints(this IEndpointRouteBuilder routes)
+    {
+        var group = routes.MapGroup("/api/v1/eclipses/{date}/local").WithTags("Sites");
+        group.MapGet("/", Get)
+            .WithName("GetLocalCircumstances")
+            .WithSummary("What one site sees of an eclipse")
+            .WithDescription("Contacts in UTC and local time with the Moon's altitude and azimuth, visibility, the Sun's altitude and sky state; moonrise, moonset and horizon-profile events; the visible part of each phase; the largest visible umbral magnitude; a plain summary; and with open=, a public-night plan. JSON, CSV (contact table) or iCalendar (one event per visible phase) by Accept or format=.")
+            .Produces<LocalResponse>(StatusCodes.Status200OK, "application/json", "text/csv", "text/calendar")
+            .ProducesValidationProblem()
+            .ProducesProblem(StatusCodes.Status404NotFound)
+            .ProducesProblem(StatusCodes.Status406NotAcceptable);
+        group.MapPost("/", Post)
+            .WithName("GetLocalCircumstancesForManySites")
+            .WithSummary("What many sites (up to 500) see of an eclipse")
+            .WithDescription("Body: {\"sites\": [{\"lat\": 47.1, \"lon\": 15.4, \"elevation\": 380, \"tz\": \"Europe/Vienna\", \"minAltitude\": 5, \"horizon\": \"90:5,180:12\", \"name\": \"…\", \"open\": \"19:00-23:30\"}, …], \"shadow\": \"danjon\", \"deltaTModel\": \"best\"}. One entry per site in request order; CSV gives one row per site.")
+            .Accepts<JsonElement>("application/json")
+            .Produces<LocalBatchResponse>(StatusCodes.Status200OK, "application/json", "text/csv")
+            .ProducesValidationProblem()
+            .ProducesProblem(StatusCodes.Status404NotFound)
+            .ProducesProblem(StatusCodes.Status413PayloadTooLarge)
+            .ProducesProblem(StatusCodes.Status415UnsupportedMediaType);
+        return routes;
+    }
+
+    internal static IResult Get(
+        HttpRequest request,
+        [Description("UTC date of greatest eclipse, YYYY-MM-DD (Julian calendar before 1582-10-15).")] string date,
+        [Description(SiteQuery.LatitudeDescription)] string? lat,
+        [Description(SiteQuery.LongitudeDescription)] string? lon,
+        [Description(SiteQuery.ElevationDescription)] string? elevation,
+        [Description(SiteQuery.TimeZoneDescription)] string? tz,
+        [Description(SiteQuery.MinAltitudeDescription)] string? minAltitude,
+        [Description(SiteQuery.HorizonDescription)] string? horizon,
+        [Description(SiteQuery.PressureDescription)] string? pressure,
+        [Description(SiteQuery.TemperatureDescription)] string? temperature,
+        [Description(SiteQuery.NameDescription)] string? name,
+        [Description(OpeningQuery.Description)] string? open,
+        [Description(ShadowQuery.ShadowDescription)] string? shadow,
+        [Description(ShadowQuery.LayerDescription)] string? layerKm,
+        [Description(DeltaTQuery.DeltaTDescription)] string? deltaT,
+        [Description(DeltaTQuery.ModelDescription)] string? deltaTModel,
+        [Description("Response format: json (default), csv or ics; overrides the Accept header.")] string? format)
+    {
+        var reader = new QueryReader();
+        var day = reader.Date("date", date);
+        var site = SiteQuery.Read(reader, new SiteFields(lat, lon, elevation, tz, minAltitude, horizon, pressure, temperature, name), required: true);
+        var hours = OpeningQuery.Read(reader, open);
+        var model = ShadowQuery.Read(reader, shadow, layerKm);
+        var time = new TimeScaleConverter(DeltaTQuery.Read(reader, deltaT, deltaTModel));
+        var output = ContentNegotiation.Choose(request, format, SingleFormats, reader);
+        if (!reader.IsValid || day is null || site is null) return Problems.InvalidQuery(reader);
+        if (output is null) return Problems.NotAcceptable(SingleFormats);
+        if (FindEclipse(day.Value, model, time) is not { } eclipse) return NoEclipse(date, model.Name);
+
+        var local = LocalCircumstancesCalculator.Compute(eclipse, site, time);
+        var plan = hours is null ? null : PublicNightPlanner.Plan(local, hours, time);
+        var response = LocalMapping.ToResponse(local, time, plan);
+        return output switch
+        {
+            OutputFormat.Csv => Results.Text(LocalFormats.ContactsCsv(response), ContentNegotiation.MediaType(OutputFormat.Csv)),
+            OutputFormat.Calendar => LocalFormats.Calendar(local, response, reader),
+            _ => TypedResults.Ok(response),
+        };
+    }
+
+    internal static async Task<IResult> Post(
+        HttpRequest request,
+        [Description("UTC date of greatest eclipse, YYYY-MM-DD (Julian calendar before 1582-10-15).")] string date,
+        [Description("Response format: json (default) or csv (one row per site); overrides the Accept header.")] string? format)
+    {
+        if (!(request.ContentType?.StartsWith("application/json", StringComparison.OrdinalIgnoreCase) ?? false))
+            return Problems.UnsupportedMediaType("Send the sites as application/json.");
+        if (request.ContentLength > MaxBatchBodyBytes) return Problems.TooLarge($"The body may be at most {MaxBatchBodyBytes / 1024} KiB.");
+        var reader = new QueryReader();
+        var day = reader.Date("date", date);
+        var output = ContentNegotiation.Choose(request, format, BatchFormats, reader);
+        var body = await BatchBody.ReadAsync(request, reader, MaxBatchBodyBytes, MaxSitesPerBatch);
+        if (body.TooLarge is { } tooLarge) return Problems.TooLarge(tooLarge);
+        if (!reader.IsValid || day is null || body.Sites is null) return Problems.InvalidQuery(reader);
+        if (output is null) return Problems.NotAcceptable(BatchFormats);
+        var time = new TimeScaleConverter(body.DeltaT!);
+        if (FindEclipse(day.Value, body.Model!, time) is not { } eclipse) return NoEclipse(date, body.Model!.Name);
+
+        var rows = body.Sites.Select(s =>
+        {
+            var local = LocalCircumstancesCalculator.Compute(eclipse, s.Site, time);
+            return LocalMapping.ToResponse(local, time, s.Hours is null ? null : PublicNightPlanner.Plan(local, s.Hours, time));
+        }).ToList();
+        return output == OutputFormat.Csv
+            ? Results.Text(LocalFormats.SitesCsv(rows), ContentNegotiation.MediaType(OutputFormat.Csv))
+            : TypedResults.Ok(new LocalBatchResponse(rows.Count, rows));
+    }
+
+    internal static LunarEclipse? FindEclipse(CalendarDate day, Astronomy.Shadow.ShadowModel model, TimeScaleConverter time)
+    {
+        var start = JulianDate.FromCalendar(day.Year, day.Month, day.Day, day.IsGregorian).Day;
+        return EclipseEndpoints.InDateRange(model, time, start, start + 1).FirstOrDefault();
+    }
+
+    private static Microsoft.AspNetCore.Http.HttpResults.ProblemHttpResult NoEclipse(string date, string model) =>
+        Problems.NotFound($"No lunar eclipse has its greatest phase on {date} (UTC) under the {model} shadow model.");
+}
