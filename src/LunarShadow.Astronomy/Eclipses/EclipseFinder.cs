@@ -73,20 +73,25 @@ public sealed class EclipseFinder
 
     private LunarEclipse? Compute(long k)
     {
-        if (Screen(k) is not { } opposition) return null;
-        var passage = ShadowPassage.Compute(_accurate, opposition);
+        if (Screen(k) is not { } screen) return null;
+        var passage = ShadowPassage.Compute(_accurate, screen.Opposition);
         return Solve(k, passage);
     }
 
-    /// <summary>Whether the full Moon of lunation k is eclipsed, deciding cheaply where the screen is unambiguous.</summary>
+    /// <summary>
+    /// Whether the full Moon of lunation k is eclipsed. The least separation cannot exceed the separation at opposition,
+    /// so where that is already well inside the penumbra (by more than the screening series' error) the answer is yes
+    /// without the exact computation; only doubtful cases are computed in full.
+    /// </summary>
     internal bool IsEclipsed(long k)
     {
         if (_byLunation.TryGetValue(k, out var known)) return known is not null;
-        return AtLunation(k) is not null;
+        if (Screen(k) is not { } screen) return false;
+        return screen.ClearlyEclipsed || AtLunation(k) is not null;
     }
 
     // Screening: the opposition in longitude on the truncated series, and the separation there against the penumbra.
-    private TtInstant? Screen(long k)
+    private (TtInstant Opposition, bool ClearlyEclipsed)? Screen(long k)
     {
         var f = Angle.FromDegrees(MeanLunation.ArgumentOfLatitudeDegrees(k)).Radians;
         if (Math.Abs(Math.Sin(f)) > SinArgumentOfLatitudeLimit) return null;
@@ -115,8 +120,9 @@ public sealed class EclipseFinder
         var geometry = new ShadowGeometry(0, separation, m.Length, s.Length, 0);
         var largestRadius = ShadowCrossSection.Radii(Model, geometry, Angle.Zero).Penumbra.Radians
             + (Model.Kind == ShadowModelKind.Layer ? Angle.FromArcseconds(30).Radians : 0);
-        var reach = largestRadius + geometry.MoonSemiDiameter.Radians + ScreeningMarginRadians;
-        return 0.99 * separation <= reach ? opposition : null;
+        var reach = largestRadius + geometry.MoonSemiDiameter.Radians;
+        if (0.99 * separation > reach + ScreeningMarginRadians) return null;
+        return (opposition, separation < reach - ScreeningMarginRadians);
     }
 
     private LunarEclipse? Solve(long k, ShadowPassage passage)
