@@ -42,18 +42,14 @@ internal static class EclipseEndpoints
         [Description("First UTC date, YYYY-MM-DD (Julian calendar before 1582-10-15; e.g. -0584-05-01), years −1999 to +3000.")] string? from,
         [Description("Last UTC date (inclusive), YYYY-MM-DD, at most 1000 years after from.")] string? to,
         [Description("Comma-separated kinds to keep: total, partial, penumbral (default: all).")] string? kind,
-        [Description(ShadowQuery.ShadowDescription)] string? shadow,
-        [Description(ShadowQuery.LayerDescription)] string? layerKm,
-        [Description(DeltaTQuery.DeltaTDescription)] string? deltaT,
-        [Description(DeltaTQuery.ModelDescription)] string? deltaTModel,
+        [AsParameters] ModelParameters computation,
         [Description("Response format: json (default) or csv; overrides the Accept header.")] string? format)
     {
         var reader = new QueryReader();
         var first = reader.Date("from", from);
         var last = reader.Date("to", to);
         var kinds = ReadKinds(reader, kind);
-        var model = ShadowQuery.Read(reader, shadow, layerKm);
-        var deltaTModelChoice = DeltaTQuery.Read(reader, deltaT, deltaTModel);
+        var (model, time) = computation.Read(reader);
         var output = ContentNegotiation.Choose(request, format, Formats, reader);
         if (first is { } f && last is { } l)
         {
@@ -64,34 +60,28 @@ internal static class EclipseEndpoints
         if (!reader.IsValid || first is null || last is null) return Problems.InvalidQuery(reader);
         if (output is null) return Problems.NotAcceptable(Formats);
 
-        var time = new TimeScaleConverter(deltaTModelChoice);
         var eclipses = InDateRange(model, time, DayOf(first.Value), DayOf(last.Value) + 1)
             .Where(e => kinds.Contains(e.Kind))
             .Select(e => EclipseMapping.ToResponse(e, time))
             .ToList();
         if (output == OutputFormat.Csv) return Results.Text(EclipseMapping.Csv(eclipses), ContentNegotiation.MediaType(OutputFormat.Csv));
-        return TypedResults.Ok(new EclipseListResponse(model.Name, LayerKm(model), deltaTModelChoice.Name, from!.Trim(), to!.Trim(),
+        return TypedResults.Ok(new EclipseListResponse(model.Name, LayerKm(model), time.DeltaTModel.Name, from!.Trim(), to!.Trim(),
             eclipses.Count, eclipses, EmbeddedDataSet.VersionTag));
     }
 
     internal static IResult One(
         HttpRequest request,
         [Description("UTC date of greatest eclipse, YYYY-MM-DD (Julian calendar before 1582-10-15).")] string date,
-        [Description(ShadowQuery.ShadowDescription)] string? shadow,
-        [Description(ShadowQuery.LayerDescription)] string? layerKm,
-        [Description(DeltaTQuery.DeltaTDescription)] string? deltaT,
-        [Description(DeltaTQuery.ModelDescription)] string? deltaTModel,
+        [AsParameters] ModelParameters computation,
         [Description("Response format: json (default) or csv; overrides the Accept header.")] string? format)
     {
         var reader = new QueryReader();
         var day = reader.Date("date", date);
-        var model = ShadowQuery.Read(reader, shadow, layerKm);
-        var deltaTModelChoice = DeltaTQuery.Read(reader, deltaT, deltaTModel);
+        var (model, time) = computation.Read(reader);
         var output = ContentNegotiation.Choose(request, format, Formats, reader);
         if (!reader.IsValid || day is null) return Problems.InvalidQuery(reader);
         if (output is null) return Problems.NotAcceptable(Formats);
 
-        var time = new TimeScaleConverter(deltaTModelChoice);
         var start = DayOf(day.Value);
         var eclipse = InDateRange(model, time, start, start + 1).FirstOrDefault();
         if (eclipse is null)

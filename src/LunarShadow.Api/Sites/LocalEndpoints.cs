@@ -58,18 +58,14 @@ internal static class LocalEndpoints
         [Description(SiteQuery.TemperatureDescription)] string? temperature,
         [Description(SiteQuery.NameDescription)] string? name,
         [Description(OpeningQuery.Description)] string? open,
-        [Description(ShadowQuery.ShadowDescription)] string? shadow,
-        [Description(ShadowQuery.LayerDescription)] string? layerKm,
-        [Description(DeltaTQuery.DeltaTDescription)] string? deltaT,
-        [Description(DeltaTQuery.ModelDescription)] string? deltaTModel,
+        [AsParameters] ModelParameters computation,
         [Description("Response format: json (default), csv or ics; overrides the Accept header.")] string? format)
     {
         var reader = new QueryReader();
         var day = reader.Date("date", date);
         var site = SiteQuery.Read(reader, new SiteFields(lat, lon, elevation, tz, minAltitude, horizon, pressure, temperature, name), required: true);
         var hours = OpeningQuery.Read(reader, open);
-        var model = ShadowQuery.Read(reader, shadow, layerKm);
-        var time = new TimeScaleConverter(DeltaTQuery.Read(reader, deltaT, deltaTModel));
+        var (model, time) = computation.Read(reader);
         var output = ContentNegotiation.Choose(request, format, SingleFormats, reader);
         if (!reader.IsValid || day is null || site is null) return Problems.InvalidQuery(reader);
         if (output is null) return Problems.NotAcceptable(SingleFormats);

@@ -45,10 +45,7 @@ internal static class UpcomingEndpoints
         [Description("Least phase that must be visible: penumbral (default), partial (partial or total) or total.")] string? phase,
         [Description("true to count only the part seen in astronomical night (Sun 18° or more below the horizon).")] string? night,
         [Description(OpeningQuery.Description + " Only the part inside counts.")] string? open,
-        [Description(ShadowQuery.ShadowDescription)] string? shadow,
-        [Description(ShadowQuery.LayerDescription)] string? layerKm,
-        [Description(DeltaTQuery.DeltaTDescription)] string? deltaT,
-        [Description(DeltaTQuery.ModelDescription)] string? deltaTModel,
+        [AsParameters] ModelParameters computation,
         [Description("Response format: json (default), csv or ics; overrides the Accept header.")] string? format,
         IClock clock)
     {
@@ -60,8 +57,7 @@ internal static class UpcomingEndpoints
         var phaseName = reader.OneOf("phase", phase, ["penumbral", "partial", "total"]) ?? "penumbral";
         var nightName = reader.OneOf("night", night, ["true", "false"]);
         var hours = OpeningQuery.Read(reader, open);
-        var model = ShadowQuery.Read(reader, shadow, layerKm);
-        var time = new TimeScaleConverter(DeltaTQuery.Read(reader, deltaT, deltaTModel));
+        var (model, time) = computation.Read(reader);
         var output = ContentNegotiation.Choose(request, format, Formats, reader);
         if (start is { } s && s.Year > SupportedRange.LastYear - 1) reader.Fail("from", $"from must be before {SupportedRange.LastYear}-01-01 to leave room to search.");
         if (!reader.IsValid || site is null || start is null) return Problems.InvalidQuery(reader);

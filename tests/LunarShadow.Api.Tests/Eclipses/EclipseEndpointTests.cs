@@ -125,4 +125,18 @@ public class EclipseEndpointTests(ApiFactory factory) : IClassFixture<ApiFactory
     {
         await JsonAssert.ProblemNaming(await _client.GetAsync(url), field);
     }
+
+    [Fact]
+    public async Task The_OpenAPI_document_names_every_parameter_in_camel_case_with_its_range()
+    {
+        var doc = await JsonAssert.OkJson(await _client.GetAsync("/openapi/v1.json"));
+        foreach (var path in new[] { "/api/v1/eclipses", "/api/v1/eclipses/{date}/local", "/api/v1/sites/upcoming" })
+        {
+            var parameters = doc.GetProperty("paths").GetProperty(path).GetProperty("get").GetProperty("parameters").EnumerateArray().ToList();
+            Assert.Contains(parameters, p => p.GetProperty("name").GetString() == "shadow" && p.GetProperty("description").GetString()!.Contains("danjon", StringComparison.Ordinal));
+            Assert.Contains(parameters, p => p.GetProperty("name").GetString() == "deltaTModel");
+            Assert.All(parameters, p => Assert.False(string.IsNullOrEmpty(p.GetProperty("description").GetString())));
+            Assert.All(parameters, p => Assert.True(char.IsLower(p.GetProperty("name").GetString()![0])));
+        }
+    }
 }
