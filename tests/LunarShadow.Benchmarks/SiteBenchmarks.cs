@@ -9,7 +9,7 @@ namespace LunarShadow.Benchmarks;
 
 /// <summary>
 /// Local circumstances with the eclipse already computed (target ≤ 100 µs per site), a 500-site batch (≤ 50 ms), and
-/// "upcoming 10" for one site with the eclipses cached as on a running server (≤ 300 ms).
+/// "upcoming 10" for one site with the eclipses cached as on a running server (≤ 300 ms), and a full photo plan (≤ 5 ms).
 /// </summary>
 [MemoryDiagnoser]
 public class SiteBenchmarks
@@ -40,6 +40,11 @@ public class SiteBenchmarks
             if (LocalCircumstancesCalculator.Compute(_eclipse, site, _time).AnyVisible) visible++;
         return visible;
     }
+
+    [Benchmark(Description = "Photo plan, one site and camera")]
+    public int PhotoPlan() => LunarShadow.Astronomy.Photography.PhotoPlanner.Plan(_eclipse, _newYork,
+        new LunarShadow.Astronomy.Photography.Camera(36, 24, 4.3, 400, 1, LunarShadow.Astronomy.Photography.Mount.FixedTripod, 400, 8),
+        new LunarShadow.Astronomy.Photography.PhotoSettings(), _time).Timeline.Count;
 
     [Benchmark(Description = "Upcoming 10 total eclipses, one site")]
     public int Upcoming10() => UpcomingEclipses.From(EclipseFinder.For(ShadowModel.Danjon), _newYork, _time,

@@ -9,6 +9,7 @@ internal enum OutputFormat
     Csv,
     Calendar,
     GeoJson,
+    Sequence,
 }
 
 /// <summary>Chooses a representation from <c>?format=</c> (which wins) or the Accept header.</summary>
@@ -20,6 +21,7 @@ internal static class ContentNegotiation
         [OutputFormat.Csv] = ("csv", "text/csv"),
         [OutputFormat.Calendar] = ("ics", "text/calendar"),
         [OutputFormat.GeoJson] = ("geojson", "application/geo+json"),
+        [OutputFormat.Sequence] = ("sequence", "application/vnd.lunarshadow.sequence+json"),
     };
 
     /// <summary>The media type of a format.</summary>

@@ -1,5 +1,6 @@
 using LunarShadow.Api.Eclipses;
 using LunarShadow.Api.Ephemeris;
+using LunarShadow.Api.Photography;
 using LunarShadow.Api.Sites;
 using Serilog;
 
@@ -30,6 +31,7 @@ internal static class Pipeline
         app.MapEclipseEndpoints();
         app.MapLocalEndpoints();
         app.MapUpcomingEndpoints();
+        app.MapPhotoEndpoints();
         return app;
     }
 }

@@ -1,0 +1,105 @@
+namespace LunarShadow.Api.Photography;
+
+/// <summary>A photo plan: a shooting timeline with exposures, framing and sequences.</summary>
+/// <param name="Site">The site (echo).</param>
+/// <param name="Eclipse">The eclipse.</param>
+/// <param name="Camera">The camera as understood.</param>
+/// <param name="Summary">What the site sees, in one line.</param>
+/// <param name="Model">The brightness model's settings and uncertainty.</param>
+/// <param name="Timeline">Rows at every visible contact and every interval across the visible eclipse.</param>
+/// <param name="Framing">Field of view, image scale, blur limits, time in a fixed frame.</param>
+/// <param name="Sequences">Multi-exposure and time-lapse plans (null when nothing is visible).</param>
+/// <param name="Cautions">Safety notes.</param>
+public sealed record PhotoPlanResponse(
+    Sites.SiteEcho Site, Sites.EclipseBrief Eclipse, CameraEcho Camera, string Summary, BrightnessModelEcho Model,
+    IReadOnlyList<TimelineRowResponse> Timeline, FramingResponse Framing, SequencesResponse? Sequences, IReadOnlyList<string> Cautions);
+
+/// <summary>The camera as understood.</summary>
+/// <param name="SensorWidthMm">Sensor width, mm.</param>
+/// <param name="SensorHeightMm">Sensor height, mm.</param>
+/// <param name="PixelPitchMicrons">Pixel pitch, µm.</param>
+/// <param name="FocalLengthMm">Effective focal length (with teleconverter), mm.</param>
+/// <param name="Aperture">Effective f-number.</param>
+/// <param name="Iso">ISO asked for (null when the shutter was fixed).</param>
+/// <param name="ShutterSeconds">Fixed shutter, if given.</param>
+/// <param name="Mount">fixed, sidereal or lunar.</param>
+public sealed record CameraEcho(double SensorWidthMm, double SensorHeightMm, double PixelPitchMicrons, double FocalLengthMm, double Aperture, double? Iso, double? ShutterSeconds, string Mount);
+
+/// <summary>The brightness model used.</summary>
+/// <param name="Danjon">Expected Danjon luminosity L.</param>
+/// <param name="ExtinctionPerAirMass">Extinction coefficient, magnitudes per air mass.</param>
+/// <param name="UncertaintyStops">One-sigma uncertainty of the totality brightness, stops.</param>
+/// <param name="Note">How to read the numbers.</param>
+public sealed record BrightnessModelEcho(double Danjon, double ExtinctionPerAirMass, double UncertaintyStops, string Note);
+
+/// <summary>One timeline row.</summary>
+/// <param name="Utc">UTC.</param>
+/// <param name="Local">Local time with offset.</param>
+/// <param name="Contact">P1, U1, U2, greatest, U3, U4 or P4 when the row is a contact.</param>
+/// <param name="Phase">uneclipsed, penumbral, partial or total.</param>
+/// <param name="UmbralFraction">Fraction of the disc in the umbra.</param>
+/// <param name="PenumbralFraction">Fraction of the disc in the penumbra only.</param>
+/// <param name="MoonAltitudeDegrees">The Moon's apparent altitude, degrees.</param>
+/// <param name="MoonAzimuthDegrees">The Moon's azimuth, degrees.</param>
+/// <param name="Airmass">Air mass.</param>
+/// <param name="BrightnessStops">What the exposure is for (sunlit limb, or the disc in totality), stops from the uneclipsed Moon above the air; negative is darker.</param>
+/// <param name="LimbStops">The brightest limb point, stops (eclipse only).</param>
+/// <param name="DiscStops">The disc's mean, stops (eclipse only).</param>
+/// <param name="Exposure">Suggested exposure.</param>
+/// <param name="Warnings">Things to watch.</param>
+public sealed record TimelineRowResponse(
+    string Utc, string Local, string? Contact, string Phase, double UmbralFraction, double PenumbralFraction, double MoonAltitudeDegrees,
+    double MoonAzimuthDegrees, double Airmass, double BrightnessStops, double LimbStops, double DiscStops, ExposureResponse Exposure, IReadOnlyList<string> Warnings);
+
+/// <summary>A suggested exposure.</summary>
+/// <param name="ShutterSeconds">Shutter, s.</param>
+/// <param name="Iso">ISO.</param>
+/// <param name="Aperture">f-number.</param>
+/// <param name="Ev100">EV at ISO 100 of the exposure.</param>
+/// <param name="BracketStops">The bracket's half-width, stops.</param>
+/// <param name="BracketShutterSeconds">Shutter times of the bracket, darkest first.</param>
+public sealed record ExposureResponse(double ShutterSeconds, double Iso, double Aperture, double Ev100, int BracketStops, IReadOnlyList<double> BracketShutterSeconds);
+
+/// <summary>Framing.</summary>
+/// <param name="FieldOfViewWidthDegrees">Horizontal field (landscape), degrees.</param>
+/// <param name="FieldOfViewHeightDegrees">Vertical field (landscape), degrees.</param>
+/// <param name="MoonDiameterPixels">The Moon's image diameter, pixels.</param>
+/// <param name="MoonFractionOfFrameHeight">The Moon's diameter over the frame's short side.</param>
+/// <param name="TrailingLimitSeconds">Longest exposure before the blur limit on this mount, s (null when the Moon is tracked).</param>
+/// <param name="FixedTripodLimitSeconds">The same on a fixed tripod, s.</param>
+/// <param name="SiderealLimitSeconds">The same on a sidereal mount, s.</param>
+/// <param name="MinutesInFixedFrame">Minutes the Moon stays in a fixed frame aimed at it at the start.</param>
+public sealed record FramingResponse(
+    double FieldOfViewWidthDegrees, double FieldOfViewHeightDegrees, double MoonDiameterPixels, double MoonFractionOfFrameHeight,
+    double? TrailingLimitSeconds, double FixedTripodLimitSeconds, double SiderealLimitSeconds, double MinutesInFixedFrame);
+
+/// <summary>Sequences.</summary>
+/// <param name="Composite">The multi-exposure across the sky.</param>
+/// <param name="TimeLapse">The time-lapse.</param>
+public sealed record SequencesResponse(CompositeResponse Composite, TimeLapseResponse TimeLapse);
+
+/// <summary>A multi-exposure across the sky.</summary>
+/// <param name="IntervalSeconds">Interval between exposures, s.</param>
+/// <param name="Exposures">Number of exposures.</param>
+/// <param name="PathWidthDegrees">Horizontal extent of the path, disc included, degrees.</param>
+/// <param name="PathHeightDegrees">Vertical extent, degrees.</param>
+/// <param name="FitsLandscape">Whether it fits the frame held landscape.</param>
+/// <param name="FitsPortrait">Whether it fits held portrait.</param>
+/// <param name="AimAzimuthDegrees">Aim the frame's centre at this azimuth.</param>
+/// <param name="AimAltitudeDegrees">and this altitude.</param>
+public sealed record CompositeResponse(double IntervalSeconds, int Exposures, double PathWidthDegrees, double PathHeightDegrees, bool FitsLandscape, bool FitsPortrait, double AimAzimuthDegrees, double AimAltitudeDegrees);
+
+/// <summary>A time-lapse.</summary>
+/// <param name="IntervalSeconds">Interval, s.</param>
+/// <param name="Frames">Frames.</param>
+/// <param name="DurationMinutes">Duration covered, minutes.</param>
+/// <param name="PlaybackSecondsAt25Fps">Playback at 25 frames per second, s.</param>
+/// <param name="StorageGigabytes">Storage, GB.</param>
+public sealed record TimeLapseResponse(double IntervalSeconds, int Frames, double DurationMinutes, double PlaybackSecondsAt25Fps, double StorageGigabytes);
+
+/// <summary>One step of a plain exposure sequence for a camera-control script.</summary>
+/// <param name="Instant">When, ISO 8601 UTC.</param>
+/// <param name="ShutterSeconds">Shutter, s.</param>
+/// <param name="Iso">ISO.</param>
+/// <param name="Aperture">f-number.</param>
+public sealed record SequenceStep(string Instant, double ShutterSeconds, double Iso, double Aperture);

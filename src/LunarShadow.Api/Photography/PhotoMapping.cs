@@ -1,0 +1,76 @@
+using LunarShadow.Api.Formatting;
+using LunarShadow.Api.Sites;
+using LunarShadow.Astronomy.Photography;
+using LunarShadow.Astronomy.Time;
+
+namespace LunarShadow.Api.Photography;
+
+/// <summary>Turns a photo plan into its representations.</summary>
+internal static class PhotoMapping
+{
+    public static PhotoPlanResponse ToResponse(PhotoPlan plan, TimeScaleConverter time)
+    {
+        var local = LocalMapping.ToResponse(plan.Local, time, null);
+        var zone = plan.Local.Site.TimeZone;
+        var c = plan.Camera;
+        var f = plan.Framing;
+        var s = plan.Sequences;
+        return new PhotoPlanResponse(
+            local.Site, local.Eclipse,
+            new CameraEcho(c.SensorWidthMm, c.SensorHeightMm, TimeFormats.Round(c.PixelPitchMicrons, 3), c.EffectiveFocalLengthMm, c.EffectiveAperture,
+                c.ShutterSeconds is null ? c.Iso : null, c.ShutterSeconds, MountName(c.Mount)),
+            local.Summary,
+            new BrightnessModelEcho(plan.Settings.Danjon, TimeFormats.Round(plan.ExtinctionPerAirMass, 4), plan.UncertaintyStops,
+                "Brightness is computed from the shadow geometry and the uneclipsed Moon; inside the umbra it is an estimate from the expected Danjon L, good to about ±1.5 stops. Bracket, and check the histogram."),
+            plan.Timeline.Select(r => new TimelineRowResponse(
+                TimeFormats.Utc(r.Utc), TimeFormats.Local(r.Utc, zone).Text, r.Contact, PhaseName(r.Phase),
+                TimeFormats.Round(r.UmbralFraction, 4), TimeFormats.Round(r.PenumbralFraction, 4),
+                TimeFormats.Round(r.Altitude.Degrees, 2), TimeFormats.Round(r.Azimuth.Degrees, 2), TimeFormats.Round(r.AirMass, 3),
+                TimeFormats.Round(r.BrightnessStops, 2), TimeFormats.Round(r.LimbStops, 2), TimeFormats.Round(r.DiscStops, 2),
+                new ExposureResponse(Seconds(r.Exposure.ShutterSeconds), Math.Round(r.Exposure.Iso), r.Exposure.Aperture, TimeFormats.Round(r.Exposure.Ev100, 2),
+                    plan.Settings.BracketStops, r.Exposure.BracketShutters.Select(Seconds).ToList()),
+                r.Warnings)).ToList(),
+            new FramingResponse(TimeFormats.Round(f.FieldWidth.Degrees, 3), TimeFormats.Round(f.FieldHeight.Degrees, 3), TimeFormats.Round(f.MoonDiameterPixels, 1),
+                TimeFormats.Round(f.MoonFractionOfFrameHeight, 4), f.TrailingLimitSeconds is { } t ? Seconds(t) : null,
+                Seconds(f.FixedTripodLimitSeconds), Seconds(f.SiderealLimitSeconds), f.MinutesInFixedFrame),
+            s is null ? null : new SequencesResponse(
+                new CompositeResponse(TimeFormats.Round(s.CompositeIntervalSeconds, 1), s.CompositeExposures, TimeFormats.Round(s.PathWidth.Degrees, 2),
+                    TimeFormats.Round(s.PathHeight.Degrees, 2), s.FitsLandscape, s.FitsPortrait, TimeFormats.Round(s.AimAzimuth.Degrees, 2), TimeFormats.Round(s.AimAltitude.Degrees, 2)),
+                new TimeLapseResponse(s.TimeLapseIntervalSeconds, s.TimeLapseFrames, TimeFormats.Round(s.TimeLapseMinutes, 1),
+                    TimeFormats.Round(s.TimeLapsePlaybackSeconds, 1), TimeFormats.Round(s.TimeLapseStorageGigabytes, 2))),
+            plan.Cautions);
+    }
+
+    public static string Csv(PhotoPlanResponse r)
+    {
+        var csv = new CsvWriter().Row("utc", "local", "contact", "phase", "umbral_fraction", "penumbral_fraction", "moon_altitude_deg", "moon_azimuth_deg",
+            "airmass", "brightness_stops", "shutter_s", "iso", "aperture", "bracket_stops", "warnings");
+        foreach (var row in r.Timeline)
+            csv.Row(row.Utc, row.Local, row.Contact, row.Phase, row.UmbralFraction, row.PenumbralFraction, row.MoonAltitudeDegrees, row.MoonAzimuthDegrees,
+                row.Airmass, row.BrightnessStops, row.Exposure.ShutterSeconds, row.Exposure.Iso, row.Exposure.Aperture, row.Exposure.BracketStops, string.Join("; ", row.Warnings));
+        return csv.ToString();
+    }
+
+    /// <summary>Every exposure of every bracket, in time order: what a camera-control script steps through.</summary>
+    public static List<SequenceStep> Sequence(PhotoPlanResponse r) => r.Timeline
+        .SelectMany(row => row.Exposure.BracketShutterSeconds.Select(t => new SequenceStep(row.Utc, t, row.Exposure.Iso, row.Exposure.Aperture)))
+        .ToList();
+
+    public static string PhaseName(MoonPhaseState state) => state switch
+    {
+        MoonPhaseState.Total => "total",
+        MoonPhaseState.Partial => "partial",
+        MoonPhaseState.Penumbral => "penumbral",
+        _ => "uneclipsed",
+    };
+
+    private static string MountName(Mount mount) => mount switch
+    {
+        Mount.SiderealTracking => "sidereal",
+        Mount.LunarTracking => "lunar",
+        _ => "fixed",
+    };
+
+    // Shutter times to four significant figures.
+    private static double Seconds(double t) => t <= 0 ? 0 : Math.Round(t, Math.Max(0, 3 - (int)Math.Floor(Math.Log10(t))));
+}
