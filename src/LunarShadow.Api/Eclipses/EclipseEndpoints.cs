@@ -60,7 +60,13 @@ internal static class EclipseEndpoints
         if (!reader.IsValid || first is null || last is null) return Problems.InvalidQuery(reader);
         if (output is null) return Problems.NotAcceptable(Formats);
 
+        var aborted = request.HttpContext.RequestAborted;
         var eclipses = InDateRange(model, time, DayOf(first.Value), DayOf(last.Value) + 1)
+            .Select(e =>
+            {
+                aborted.ThrowIfCancellationRequested(); // honours the request timeout on long ranges
+                return e;
+            })
             .Where(e => kinds.Contains(e.Kind))
             .Select(e => EclipseMapping.ToResponse(e, time))
             .ToList();

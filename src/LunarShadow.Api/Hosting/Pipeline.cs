@@ -11,9 +11,15 @@ internal static class Pipeline
 {
     public static WebApplication UseLunarShadowPipeline(this WebApplication app)
     {
+        app.UseMiddleware<CorrelationIdMiddleware>();
+        app.UseSerilogRequestLogging();
         app.UseExceptionHandler();
         app.UseStatusCodePages();
-        app.UseSerilogRequestLogging();
+        app.UseRateLimiter();
+        app.UseMiddleware<EntityTagMiddleware>();
+        app.UseResponseCompression();
+        app.UseRequestTimeouts();
+        app.UseOutputCache();
         return app;
     }
 
@@ -27,6 +33,8 @@ internal static class Pipeline
             options.DocumentTitle = "LunarShadow API";
         });
         app.MapGet("/", () => Results.Redirect("/docs")).ExcludeFromDescription();
+        app.MapHealthChecks("/health/live", new Microsoft.AspNetCore.Diagnostics.HealthChecks.HealthCheckOptions { Predicate = _ => false });
+        app.MapHealthChecks("/health/ready", new Microsoft.AspNetCore.Diagnostics.HealthChecks.HealthCheckOptions { Predicate = c => c.Tags.Contains("ready") });
         app.MapEphemerisEndpoints();
         app.MapEclipseEndpoints();
         app.MapLocalEndpoints();

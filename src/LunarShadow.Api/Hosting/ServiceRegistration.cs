@@ -13,6 +13,25 @@ internal static class ServiceRegistration
             .ReadFrom.Services(services)
             .Enrich.FromLogContext());
         builder.Services.AddSingleton<NodaTime.IClock>(NodaTime.SystemClock.Instance);
+        builder.Services.AddLunarShadowRateLimiting(builder.Configuration);
+        builder.Services.AddHealthChecks().AddCheck<ReadinessCheck>("ephemeris", tags: ["ready"]);
+        builder.Services.AddRequestTimeouts(options => options.DefaultPolicy = new Microsoft.AspNetCore.Http.Timeouts.RequestTimeoutPolicy
+        {
+            Timeout = TimeSpan.FromSeconds(builder.Configuration.GetValue("RequestTimeoutSeconds", 30)),
+            TimeoutStatusCode = StatusCodes.Status503ServiceUnavailable,
+        });
+        builder.Services.AddResponseCompression(options =>
+        {
+            options.EnableForHttps = true;
+            options.MimeTypes = Microsoft.AspNetCore.ResponseCompression.ResponseCompressionDefaults.MimeTypes.Concat(
+                ["text/csv", "text/calendar", "application/geo+json", "application/problem+json", "application/vnd.lunarshadow.sequence+json"]);
+        });
+        builder.Services.AddOutputCache(options =>
+        {
+            options.AddBasePolicy(policy => policy.With(c => c.HttpContext.Request.Path.StartsWithSegments("/api"))
+                .SetVaryByQuery("*").SetVaryByHeader("Accept").Expire(TimeSpan.FromHours(1)));
+            options.SizeLimit = 256L * 1024 * 1024;
+        });
         builder.Services.AddProblemDetails();
         // Numbers are written and read as JSON numbers only, so the OpenAPI schema shows them as such.
         builder.Services.ConfigureHttpJsonOptions(options => options.SerializerOptions.NumberHandling = JsonNumberHandling.Strict);

@@ -67,7 +67,14 @@ internal static class UpcomingEndpoints
             phaseName switch { "total" => EclipsePhase.Total, "partial" => EclipsePhase.Partial, _ => EclipsePhase.Penumbral },
             nightName == "true", null, hours);
         var startTt = TtInstant.FromJulianDate(JulianDate.FromCalendar(start.Value.Year, start.Value.Month, start.Value.Day, start.Value.IsGregorian).Day);
-        var found = UpcomingEclipses.From(EclipseFinder.For(model), site, time, startTt, criteria).Take(wanted).ToList();
+        var aborted = request.HttpContext.RequestAborted;
+        var found = UpcomingEclipses.From(EclipseFinder.For(model), site, time, startTt, criteria)
+            .Select(u =>
+            {
+                aborted.ThrowIfCancellationRequested(); // honours the request timeout on long searches
+                return u;
+            })
+            .Take(wanted).ToList();
         var items = found.Select(u =>
         {
             var full = LocalMapping.ToResponse(u.Local, time, null);

@@ -1,0 +1,92 @@
+using System.Net;
+using System.Text;
+using Microsoft.AspNetCore.Hosting;
+using Microsoft.AspNetCore.Mvc.Testing;
+
+namespace LunarShadow.Api.Tests.Hosting;
+
+/// <summary>
+/// Throws thousands of malformed and extreme inputs at every endpoint and asserts that none gets a 5xx and that every
+/// refusal is a problem response. Seeded, so a failure repeats.
+/// </summary>
+public class FuzzTests
+{
+    private static readonly string[] Nasty =
+    [
+        "", " ", "NaN", "nan", "Infinity", "-Infinity", "1e309", "-1e309", "1e-400", "-0", "0", "90.0000001", "-90", "180", "-180.5",
+        "12abc", "0x1F", "1,5", "١٢", "∞", "null", "true", "[]", "{}", "%00", "\u0000", "'; DROP TABLE x;--", new string('9', 400),
+        new string('a', 5000), "2025-02-30", "2025-13-01", "1582-10-10", "-2500-01-01", "3001-01-01", "2025-03-14", "-1999-06-26",
+        "2025-03-14T06:58:00Z", "2025-03-14T25:00:00Z", "2025-03-14T06:58:00+19:00", "Europe/Nowhere", "UTC", "Etc/GMT+14",
+        "19:00-23:30", "24:00-01:00", "07:00-07:00", "90:5,180:12", "90:5,abc", "400:5", "1:2:3", "36x24", "0x0", "1e3x1e3",
+        "danjon", "layer", "chauvenet", "none", "best", "espenak-meeus-2006", "json", "csv", "ics", "sequence", "geojson", "xml",
+        "total,partial", "annular", "fixed", "lunar", "gimbal", "-5", "5", "50", "51", "500", "100000", "409601", "0.94", "64.1",
+    ];
+
+    private static readonly (string Path, string[] Names)[] Endpoints =
+    [
+        ("/api/v1/ephemeris", ["utc", "lat", "lon", "elevation", "pressure", "temperature", "deltaT", "deltaTModel"]),
+        ("/api/v1/eclipses", ["from", "to", "kind", "shadow", "layerKm", "deltaT", "deltaTModel", "format"]),
+        ("/api/v1/eclipses/{date}", ["shadow", "layerKm", "deltaT", "deltaTModel", "format"]),
+        ("/api/v1/eclipses/{date}/local", ["lat", "lon", "elevation", "tz", "minAltitude", "horizon", "pressure", "temperature", "name", "open", "shadow", "deltaT", "format"]),
+        ("/api/v1/sites/upcoming", ["lat", "lon", "tz", "from", "count", "phase", "night", "open", "minAltitude", "format"]),
+        ("/api/v1/eclipses/{date}/photo-plan", ["lat", "lon", "tz", "iso", "aperture", "shutter", "focalLength", "teleconverter", "sensor", "pixelPitch", "pixels", "mount", "danjon", "interval", "bracket", "blur", "extinction", "gap", "timelapseInterval", "fileSize", "start", "format"]),
+    ];
+
+    private static readonly string[] Dates = ["2025-03-14", "2022-11-08", "2025-03-15", "abc", "-1999-06-26", "2025-02-30", "99999-01-01", "%20"];
+
+    [Fact]
+    public async Task No_input_makes_the_service_fail()
+    {
+        await using var factory = new WebApplicationFactory<Program>().WithWebHostBuilder(b =>
+        {
+            b.UseSetting("RateLimiting:PermitsPerSecond", "1000000");
+            b.UseSetting("RateLimiting:Burst", "1000000");
+        });
+        var client = factory.CreateClient();
+        var random = new Random(6);
+        var failures = new List<string>();
+        var seen = new HashSet<HttpStatusCode>();
+        for (var i = 0; i < 2500; i++)
+        {
+            var (path, names) = Endpoints[random.Next(Endpoints.Length)];
+            var url = path.Replace("{date}", Uri.EscapeDataString(Dates[random.Next(Dates.Length)]), StringComparison.Ordinal);
+            var query = string.Join('&', Enumerable.Range(0, random.Next(0, 6)).Select(_ =>
+                $"{names[random.Next(names.Length)]}={Uri.EscapeDataString(Nasty[random.Next(Nasty.Length)])}"));
+            // Keep the service's own work bounded: long date ranges are legitimate but slow, and are not what is fuzzed here.
+            if (query.Contains("from=-1999", StringComparison.Ordinal)) continue;
+            var response = await client.GetAsync(url + (query.Length > 0 ? "?" + query : ""));
+            seen.Add(response.StatusCode);
+            await Check(response, "GET " + url + "?" + query, failures);
+        }
+        string[] bodies =
+        [
+            "", "{", "[]", "null", "\"x\"", "{\"sites\":null}", "{\"sites\":[null]}", "{\"sites\":[{\"lat\":\"NaN\",\"lon\":1}]}",
+            "{\"sites\":[{\"lat\":1e999,\"lon\":1}]}", "{\"sites\":[" + string.Join(',', Enumerable.Repeat("{\"lat\":1,\"lon\":1}", 600)) + "]}",
+            "{\"lat\":{\"a\":{\"b\":{\"c\":{\"d\":{\"e\":{\"f\":{\"g\":{\"h\":1}}}}}}}}}", "{\"lat\":1,\"lon\":1,\"iso\":true}",
+            "{\"lat\":1,\"lon\":1,\"sensor\":\"1x1\",\"focalLength\":10000,\"pixelPitch\":0.5}", new string('[', 5000),
+        ];
+        foreach (var body in bodies)
+        {
+            foreach (var (path, type) in new[] { ("/api/v1/eclipses/2025-03-14/local", "application/json"), ("/api/v1/eclipses/2025-03-14/photo-plan", "application/json"), ("/api/v1/eclipses/2025-03-14/local", "text/xml") })
+            {
+                var response = await client.PostAsync(path, new StringContent(body, Encoding.UTF8, type));
+                await Check(response, $"POST {path} ({type}) {body[..Math.Min(60, body.Length)]}", failures);
+            }
+        }
+        Assert.True(failures.Count == 0, string.Join("\n", failures.Take(20)));
+        // The inputs reached both the computations and the refusals.
+        Assert.Contains(HttpStatusCode.OK, seen);
+        Assert.Contains(HttpStatusCode.BadRequest, seen);
+        Assert.Contains(HttpStatusCode.NotFound, seen);
+    }
+
+    private static async Task Check(HttpResponseMessage response, string what, List<string> failures)
+    {
+        var status = (int)response.StatusCode;
+        if (status >= 500) failures.Add($"{status} for {what}: {await response.Content.ReadAsStringAsync()}");
+        else if (status >= 400 && status != 404 && response.Content.Headers.ContentType?.MediaType != "application/problem+json")
+            failures.Add($"{status} without a problem response for {what}");
+        else if (status == 404 && response.Content.Headers.ContentLength != 0 && response.Content.Headers.ContentType?.MediaType != "application/problem+json")
+            failures.Add($"404 without a problem response for {what}");
+    }
+}
