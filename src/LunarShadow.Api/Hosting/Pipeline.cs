@@ -37,6 +37,7 @@ internal static class Pipeline
         app.MapHealthChecks("/health/ready", new Microsoft.AspNetCore.Diagnostics.HealthChecks.HealthCheckOptions { Predicate = c => c.Tags.Contains("ready") });
         app.MapEphemerisEndpoints();
         app.MapEclipseEndpoints();
+        app.MapVisibilityMapEndpoints();
         app.MapLocalEndpoints();
         app.MapUpcomingEndpoints();
         app.MapPhotoEndpoints();
