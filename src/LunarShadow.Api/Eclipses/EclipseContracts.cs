@@ -30,6 +30,7 @@ public sealed record EclipseListResponse(
 /// <param name="ShadowModel">Shadow model used.</param>
 /// <param name="LayerKm">Opaque-layer height in km (layer model only).</param>
 /// <param name="Lunation">Lunation number (0 = new Moon of 2000 January 6).</param>
+/// <param name="ShadowDiagram">The Moon's path through the shadow, for drawing.</param>
 public sealed record EclipseResponse(
     string Date,
     string Kind,
@@ -46,7 +47,22 @@ public sealed record EclipseResponse(
     ShadowRadiiResponse ShadowRadii,
     string ShadowModel,
     double? LayerKm,
-    long Lunation);
+    long Lunation,
+    ShadowDiagramResponse ShadowDiagram);
+
+/// <summary>The Moon's path through the shadow as seen from the Earth's centre: offsets of the Moon's centre from the
+/// shadow's centre, east and north on the sky (equator of date), at each contact and at greatest eclipse.</summary>
+/// <param name="UmbraRadiusDegrees">Umbral radius at greatest eclipse, degrees.</param>
+/// <param name="PenumbraRadiusDegrees">Penumbral radius at greatest eclipse, degrees.</param>
+/// <param name="MoonRadiusDegrees">The Moon's semi-diameter at greatest eclipse, degrees.</param>
+/// <param name="Points">The Moon's centre at P1 … P4 and greatest eclipse.</param>
+public sealed record ShadowDiagramResponse(double UmbraRadiusDegrees, double PenumbraRadiusDegrees, double MoonRadiusDegrees, IReadOnlyList<PathPointResponse> Points);
+
+/// <summary>The Moon's centre relative to the shadow's centre.</summary>
+/// <param name="Name">P1, U1, U2, greatest, U3, U4 or P4.</param>
+/// <param name="EastDegrees">Offset toward the east, degrees.</param>
+/// <param name="NorthDegrees">Offset toward the north, degrees.</param>
+public sealed record PathPointResponse(string Name, double EastDegrees, double NorthDegrees);
 
 /// <summary>An instant in UTC and TT, with how well its UTC is known.</summary>
 /// <param name="Utc">ISO 8601 UTC.</param>

@@ -36,7 +36,24 @@ internal static class EclipseMapping
             new ShadowRadiiResponse(TimeFormats.Round(e.RadiiAtGreatest.Umbra.Degrees, 5), TimeFormats.Round(e.RadiiAtGreatest.Penumbra.Degrees, 5)),
             e.Model.Name,
             e.Model.Kind == ShadowModelKind.Layer ? e.Model.LayerHeightKm : null,
-            e.Lunation);
+            e.Lunation,
+            Diagram(e));
+    }
+
+    private static ShadowDiagramResponse Diagram(LunarEclipse e)
+    {
+        PathPointResponse Point(string name, TtInstant tt)
+        {
+            var g = e.Passage.At(e.Passage.HoursFromCenter(tt));
+            const double degrees = 180 / Math.PI;
+            return new PathPointResponse(name, TimeFormats.Round(Math.Atan(g.XiRadians) * degrees, 5), TimeFormats.Round(Math.Atan(g.EtaRadians) * degrees, 5));
+        }
+        var points = e.Contacts.Where(c => c.Name <= ContactName.U2).Select(c => Point(c.Name.ToString(), c.Tt))
+            .Append(Point("greatest", e.GreatestEclipse))
+            .Concat(e.Contacts.Where(c => c.Name >= ContactName.U3).Select(c => Point(c.Name.ToString(), c.Tt)))
+            .ToList();
+        return new ShadowDiagramResponse(TimeFormats.Round(e.RadiiAtGreatest.Umbra.Degrees, 5), TimeFormats.Round(e.RadiiAtGreatest.Penumbra.Degrees, 5),
+            TimeFormats.Round(e.MoonAtGreatest.SemiDiameter.Degrees, 5), points);
     }
 
     public static string KindName(EclipseKind kind) => kind switch

@@ -14,6 +14,7 @@ namespace LunarShadow.Api.Sites;
 /// <param name="Summary">One plain line on what the site sees.</param>
 /// <param name="PublicNight">The plan within the opening hours, when <c>open</c> was given.</param>
 /// <param name="Cautions">Safety notes that apply to this night.</param>
+/// <param name="Track">The Moon's and Sun's altitude through the night, when <c>track</c> was asked for.</param>
 public sealed record LocalResponse(
     SiteEcho Site,
     EclipseBrief Eclipse,
@@ -27,7 +28,17 @@ public sealed record LocalResponse(
     VisibleMagnitudeResponse? MaxVisibleUmbralMagnitude,
     string Summary,
     PublicNightResponse? PublicNight,
-    IReadOnlyList<string> Cautions);
+    IReadOnlyList<string> Cautions,
+    IReadOnlyList<TrackPointResponse>? Track = null);
+
+/// <summary>One sample of the night.</summary>
+/// <param name="Utc">UTC.</param>
+/// <param name="Local">Local time.</param>
+/// <param name="MoonAltitudeDegrees">The Moon's apparent altitude, degrees.</param>
+/// <param name="MoonAzimuthDegrees">The Moon's azimuth, degrees.</param>
+/// <param name="HorizonAltitudeDegrees">The horizon profile's altitude at the Moon's azimuth, degrees.</param>
+/// <param name="SunAltitudeDegrees">The Sun's airless altitude, degrees.</param>
+public sealed record TrackPointResponse(string Utc, string Local, double MoonAltitudeDegrees, double MoonAzimuthDegrees, double HorizonAltitudeDegrees, double SunAltitudeDegrees);
 
 /// <summary>The site as the service understood it.</summary>
 /// <param name="Name">The name given, if any.</param>

@@ -58,6 +58,7 @@ internal static class LocalEndpoints
         [Description(SiteQuery.TemperatureDescription)] string? temperature,
         [Description(SiteQuery.NameDescription)] string? name,
         [Description(OpeningQuery.Description)] string? open,
+        [Description("Add the Moon's and Sun's altitude through the night, sampled every this many minutes, 5 to 60, over 8 hours either side of greatest eclipse.")] string? track,
         [AsParameters] ModelParameters computation,
         [Description("Response format: json (default), csv or ics; overrides the Accept header.")] string? format)
     {
@@ -65,6 +66,7 @@ internal static class LocalEndpoints
         var day = reader.Date("date", date);
         var site = SiteQuery.Read(reader, new SiteFields(lat, lon, elevation, tz, minAltitude, horizon, pressure, temperature, name), required: true);
         var hours = OpeningQuery.Read(reader, open);
+        var trackMinutes = reader.Number("track", track, 5, 60, "minutes");
         var (model, time) = computation.Read(reader);
         var output = ContentNegotiation.Choose(request, format, SingleFormats, reader);
         if (!reader.IsValid || day is null || site is null) return Problems.InvalidQuery(reader);
@@ -74,6 +76,7 @@ internal static class LocalEndpoints
         var local = LocalCircumstancesCalculator.Compute(eclipse, site, time);
         var plan = hours is null ? null : PublicNightPlanner.Plan(local, hours, time);
         var response = LocalMapping.ToResponse(local, time, plan);
+        if (trackMinutes is { } step) response = response with { Track = LocalMapping.Track(local, step, time) };
         return output switch
         {
             OutputFormat.Csv => Results.Text(LocalFormats.ContactsCsv(response), ContentNegotiation.MediaType(OutputFormat.Csv)),

@@ -49,6 +49,24 @@ internal static class LocalMapping
             Cautions(l));
     }
 
+    /// <summary>The Moon's and Sun's altitude every few minutes over 8 hours either side of greatest eclipse.</summary>
+    public static List<TrackPointResponse> Track(LocalCircumstances l, double stepMinutes, TimeScaleConverter time)
+    {
+        var sky = new LocalSky(l.Eclipse.NightSky, l.Site, l.DeltaTSeconds);
+        var offset = l.Eclipse.GreatestEclipse.SecondsSince(TtInstant.FromJulianDate(time.ToUtc(l.Eclipse.GreatestEclipse).ToJulianDate()));
+        var points = new List<TrackPointResponse>();
+        for (var minutes = -480.0; minutes <= 480.0 + 1e-9; minutes += stepMinutes)
+        {
+            var h = minutes / 60;
+            var moon = sky.MoonAt(h);
+            var utc = TimeFormats.FromJulianDate(sky.InstantAt(h).JulianDate.Day - offset / 86400);
+            points.Add(new TrackPointResponse(TimeFormats.Utc(utc), TimeFormats.Local(utc, l.Site.TimeZone).Text,
+                TimeFormats.Round(moon.ApparentAltitude.Degrees, 2), TimeFormats.Round(moon.Azimuth.Degrees, 2),
+                TimeFormats.Round(l.Site.Horizon.AltitudeAt(moon.Azimuth).Degrees, 2), TimeFormats.Round(sky.SunAltitudeAt(h).Degrees, 2)));
+        }
+        return points;
+    }
+
     public static SiteEcho Echo(Site site) => new(
         site.Name,
         site.Location.Latitude.Degrees,

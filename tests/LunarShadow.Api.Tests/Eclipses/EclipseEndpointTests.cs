@@ -139,4 +139,24 @@ public class EclipseEndpointTests(ApiFactory factory) : IClassFixture<ApiFactory
             Assert.All(parameters, p => Assert.True(char.IsLower(p.GetProperty("name").GetString()![0])));
         }
     }
+
+    // Five Millennium Canon: 2025 March 14, gamma 0.3484 (north of the axis) — at greatest eclipse the Moon's centre is
+    // gamma Earth radii from the axis: gamma × the Moon's horizontal parallax (0.91° that night) ≈ 0.317°, on the north side.
+    [Fact]
+    public async Task The_shadow_diagram_traces_the_moon_through_the_shadow()
+    {
+        var e = await JsonAssert.OkJson(await _client.GetAsync("/api/v1/eclipses/2025-03-14"));
+        var d = e.GetProperty("shadowDiagram");
+        Assert.InRange(d.GetProperty("umbraRadiusDegrees").GetDouble(), 0.6, 0.8);
+        var points = d.GetProperty("points").EnumerateArray().ToList();
+        Assert.Equal(["P1", "U1", "U2", "greatest", "U3", "U4", "P4"], points.Select(p => p.GetProperty("name").GetString()));
+        var greatest = points[3];
+        Assert.True(greatest.GetProperty("northDegrees").GetDouble() > 0);
+        var least = Math.Sqrt(Math.Pow(greatest.GetProperty("eastDegrees").GetDouble(), 2) + Math.Pow(greatest.GetProperty("northDegrees").GetDouble(), 2));
+        var parallax = e.GetProperty("moonAtGreatest").GetProperty("semiDiameterArcsec").GetDouble() / 3600 / 0.2725076;
+        Assert.Equal(0.3484 * parallax, least, 0.003);
+        var p1 = points[0];
+        var distance = Math.Sqrt(Math.Pow(p1.GetProperty("eastDegrees").GetDouble(), 2) + Math.Pow(p1.GetProperty("northDegrees").GetDouble(), 2));
+        Assert.Equal(d.GetProperty("penumbraRadiusDegrees").GetDouble() + d.GetProperty("moonRadiusDegrees").GetDouble(), distance, 0.01);
+    }
 }

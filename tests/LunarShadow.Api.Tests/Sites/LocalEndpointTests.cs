@@ -188,4 +188,15 @@ public class LocalEndpointTests(ApiFactory factory) : IClassFixture<ApiFactory>
         var ics = await _client.GetAsync("/api/v1/sites/upcoming?lat=40.7&lon=-74&from=2025-01-01&count=3&phase=total&format=ics");
         Assert.Equal("text/calendar", ics.Content.Headers.ContentType?.MediaType);
     }
+
+    [Fact]
+    public async Task A_track_of_the_night_comes_on_request()
+    {
+        var l = await JsonAssert.OkJson(await _client.GetAsync("/api/v1/eclipses/2025-03-14/local?lat=40.7&lon=-74&track=10&horizon=0:5,180:5"));
+        var track = l.GetProperty("track").EnumerateArray().ToList();
+        Assert.Equal(97, track.Count); // 16 hours every 10 minutes, both ends included
+        Assert.All(track, t => Assert.Equal(5, t.GetProperty("horizonAltitudeDegrees").GetDouble(), 6));
+        Assert.Contains(track, t => t.GetProperty("sunAltitudeDegrees").GetDouble() > 0);
+        await JsonAssert.ProblemNaming(await _client.GetAsync("/api/v1/eclipses/2025-03-14/local?lat=40.7&lon=-74&track=1"), "track");
+    }
 }
