@@ -32,7 +32,11 @@ internal static class Pipeline
             options.SwaggerEndpoint("/openapi/v1.json", "LunarShadow v1");
             options.DocumentTitle = "LunarShadow API";
         });
-        app.MapGet("/", () => Results.Redirect("/docs")).ExcludeFromDescription();
+        app.UseDefaultFiles();
+        app.UseStaticFiles(new StaticFileOptions
+        {
+            ContentTypeProvider = new Microsoft.AspNetCore.StaticFiles.FileExtensionContentTypeProvider { Mappings = { [".geojson"] = "application/geo+json" } },
+        });
         app.MapHealthChecks("/health/live", new Microsoft.AspNetCore.Diagnostics.HealthChecks.HealthCheckOptions { Predicate = _ => false });
         app.MapHealthChecks("/health/ready", new Microsoft.AspNetCore.Diagnostics.HealthChecks.HealthCheckOptions { Predicate = c => c.Tags.Contains("ready") });
         app.MapEphemerisEndpoints();
