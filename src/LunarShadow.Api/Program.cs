@@ -1,6 +1,10 @@
 using LunarShadow.Api.Hosting;
 using Serilog;
 
+// `--health-probe URL`: exit 0 when URL answers 200 (the container health check; the runtime image has no curl).
+if (args is ["--health-probe", var probe])
+    return await HealthProbe.RunAsync(new Uri(probe));
+
 Log.Logger = new LoggerConfiguration().WriteTo.Console().CreateBootstrapLogger();
 
 var builder = WebApplication.CreateBuilder(args);
@@ -10,6 +14,7 @@ var app = builder.Build();
 app.UseLunarShadowPipeline();
 app.MapLunarShadowEndpoints();
 app.Run();
+return 0;
 
 /// <summary>The web host's entry point (public for the API tests' WebApplicationFactory).</summary>
 public partial class Program;
