@@ -35,7 +35,7 @@ internal static class ServiceRegistration
         builder.Services.AddProblemDetails();
         // Numbers are written and read as JSON numbers only, so the OpenAPI schema shows them as such.
         builder.Services.ConfigureHttpJsonOptions(options => options.SerializerOptions.NumberHandling = JsonNumberHandling.Strict);
-        builder.Services.AddOpenApi("v1", options => options.AddDocumentTransformer((document, _, _) =>
+        builder.Services.AddOpenApi("v1", options => options.AddSchemaTransformer<TimeSchemaTransformer>().AddDocumentTransformer((document, _, _) =>
         {
             document.Info.Title = "LunarShadow";
             document.Info.Description = "Lunar eclipses for your own site and time zone: ephemeris, shadow, eclipses, local circumstances and photography plans, computed from ELP/MPP02 and VSOP87 at request time.";

@@ -159,4 +159,15 @@ public class EclipseEndpointTests(ApiFactory factory) : IClassFixture<ApiFactory
         var distance = Math.Sqrt(Math.Pow(p1.GetProperty("eastDegrees").GetDouble(), 2) + Math.Pow(p1.GetProperty("northDegrees").GetDouble(), 2));
         Assert.Equal(d.GetProperty("penumbraRadiusDegrees").GetDouble() + d.GetProperty("moonRadiusDegrees").GetDouble(), distance, 0.01);
     }
+
+    [Fact]
+    public async Task The_OpenAPI_document_describes_utc_as_date_time_and_tt_as_terrestrial_time()
+    {
+        var doc = await JsonAssert.OkJson(await _client.GetAsync("/openapi/v1.json"));
+        var instant = doc.GetProperty("components").GetProperty("schemas").GetProperty("InstantResponse").GetProperty("properties");
+        Assert.Equal("date-time", instant.GetProperty("utc").GetProperty("format").GetString());
+        Assert.Contains("Terrestrial Time", instant.GetProperty("tt").GetProperty("description").GetString(), StringComparison.Ordinal);
+        var contact = doc.GetProperty("components").GetProperty("schemas").GetProperty("LocalContactResponse").GetProperty("properties");
+        Assert.Equal("date-time", contact.GetProperty("local").GetProperty("format").GetString());
+    }
 }
