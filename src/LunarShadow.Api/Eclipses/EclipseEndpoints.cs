@@ -85,13 +85,7 @@ internal static class EclipseEndpoints
         var day = reader.Date("date", date);
         var (model, time) = computation.Read(reader);
         var output = ContentNegotiation.Choose(request, format, Formats, reader);
-        if (!reader.IsValid || day is null) return Problems.InvalidQuery(reader);
-        if (output is null) return Problems.NotAcceptable(Formats);
-
-        var start = DayOf(day.Value);
-        var eclipse = InDateRange(model, time, start, start + 1).FirstOrDefault();
-        if (eclipse is null)
-            return Problems.NotFound($"No lunar eclipse has its greatest phase on {date} (UTC) under the {model.Name} shadow model. List nearby eclipses with /api/v1/eclipses?from=…&to=….");
+        if (EclipseLookup.Resolve(reader, day, date, output, Formats, model, time, out var eclipse) is { } problem) return problem;
         var response = EclipseMapping.ToResponse(eclipse, time);
         return output == OutputFormat.Csv
             ? Results.Text(EclipseMapping.Csv([response]), ContentNegotiation.MediaType(OutputFormat.Csv))

@@ -35,17 +35,14 @@ internal static class VisibilityMapEndpoints
         var day = reader.Date("date", date);
         var (model, time) = computation.Read(reader);
         var output = ContentNegotiation.Choose(request, format, Formats, reader);
-        if (!reader.IsValid || day is null) return Problems.InvalidQuery(reader);
-        if (output is null) return Problems.NotAcceptable(Formats);
-        if (Sites.LocalEndpoints.FindEclipse(day.Value, model, time) is not { } eclipse)
-            return Problems.NotFound($"No lunar eclipse has its greatest phase on {date} (UTC) under the {model.Name} shadow model.");
+        if (EclipseLookup.Resolve(reader, day, date, output, Formats, model, time, out var eclipse) is { } problem) return problem;
 
         var regions = VisibilityMap.Compute(eclipse, time.DeltaTAt(eclipse.GreatestEclipse).Seconds);
         var features = regions.Select(r => new GeoJsonFeature(
             new GeoJsonMultiPolygon(r.Boxes.Select(b => new[] { new[] { new[] { b.West, b.South }, new[] { b.East, b.South }, new[] { b.East, b.North }, new[] { b.West, b.North }, new[] { b.West, b.South } } }).ToList()),
             new VisibilityProperties(r.Name, Describe(r.Name), r.Tt is { } tt ? TimeFormats.Utc(time.ToUtc(tt)) : null, VisibilityMap.ResolutionDegrees))).ToList();
         var collection = new VisibilityMapDocument(features, EclipseMapping.KindName(eclipse.Kind), TimeFormats.UtcDate(time.ToUtc(eclipse.GreatestEclipse)), model.Name);
-        return Results.Json(collection, contentType: ContentNegotiation.MediaType(output.Value));
+        return Results.Json(collection, contentType: ContentNegotiation.MediaType(output!.Value));
     }
 
     private static string Describe(string name) => name switch

@@ -1,5 +1,6 @@
 using System.ComponentModel;
 using System.Text.Json;
+using LunarShadow.Api.Eclipses;
 using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Sites;
 using LunarShadow.Api.Validation;
@@ -65,12 +66,9 @@ internal static class PhotoEndpoints
         var (model, time) = computation.Read(reader);
         var (site, camera, settings) = PhotoRequest.Read(reader, field, time);
         var output = ContentNegotiation.Choose(request, format, Formats, reader);
-        if (!reader.IsValid || day is null || site is null || camera is null || settings is null) return Problems.InvalidQuery(reader);
-        if (output is null) return Problems.NotAcceptable(Formats);
-        if (LocalEndpoints.FindEclipse(day.Value, model, time) is not { } eclipse)
-            return Problems.NotFound($"No lunar eclipse has its greatest phase on {date} (UTC) under the {model.Name} shadow model.");
+        if (EclipseLookup.Resolve(reader, day, date, output, Formats, model, time, out var eclipse) is { } problem) return problem;
 
-        var plan = PhotoPlanner.Plan(eclipse, site, camera, settings, time);
+        var plan = PhotoPlanner.Plan(eclipse, site!, camera!, settings!, time);
         var response = PhotoMapping.ToResponse(plan, time);
         return output switch
         {

@@ -69,11 +69,10 @@ internal static class LocalEndpoints
         var trackMinutes = reader.Number("track", track, 5, 60, "minutes");
         var (model, time) = computation.Read(reader);
         var output = ContentNegotiation.Choose(request, format, SingleFormats, reader);
-        if (!reader.IsValid || day is null || site is null) return Problems.InvalidQuery(reader);
-        if (output is null) return Problems.NotAcceptable(SingleFormats);
-        if (FindEclipse(day.Value, model, time) is not { } eclipse) return NoEclipse(date, model.Name);
+        if (site is null && reader.IsValid) reader.Fail("lat", "lat and lon are required.");
+        if (EclipseLookup.Resolve(reader, day, date, output, SingleFormats, model, time, out var eclipse) is { } problem) return problem;
 
-        var local = LocalCircumstancesCalculator.Compute(eclipse, site, time);
+        var local = LocalCircumstancesCalculator.Compute(eclipse, site!, time);
         var plan = hours is null ? null : PublicNightPlanner.Plan(local, hours, time);
         var response = LocalMapping.ToResponse(local, time, plan);
         if (trackMinutes is { } step) response = response with { Track = LocalMapping.Track(local, step, time) };
@@ -98,12 +97,11 @@ internal static class LocalEndpoints
         var output = ContentNegotiation.Choose(request, format, BatchFormats, reader);
         var body = await BatchBody.ReadAsync(request, reader, MaxBatchBodyBytes, MaxSitesPerBatch);
         if (body.TooLarge is { } tooLarge) return Problems.TooLarge(tooLarge);
-        if (!reader.IsValid || day is null || body.Sites is null) return Problems.InvalidQuery(reader);
-        if (output is null) return Problems.NotAcceptable(BatchFormats);
-        var time = new TimeScaleConverter(body.DeltaT!);
-        if (FindEclipse(day.Value, body.Model!, time) is not { } eclipse) return NoEclipse(date, body.Model!.Name);
+        if (body.Sites is null && reader.IsValid) reader.Fail("sites", "sites must hold at least one site.");
+        var time = new TimeScaleConverter(body.DeltaT ?? Astronomy.Time.DeltaTModelCatalog.Default);
+        if (EclipseLookup.Resolve(reader, day, date, output, BatchFormats, body.Model ?? Astronomy.Shadow.ShadowModel.Danjon, time, out var eclipse) is { } problem) return problem;
 
-        var rows = body.Sites.Select(s =>
+        var rows = body.Sites!.Select(s =>
         {
             var local = LocalCircumstancesCalculator.Compute(eclipse, s.Site, time);
             return LocalMapping.ToResponse(local, time, s.Hours is null ? null : PublicNightPlanner.Plan(local, s.Hours, time));
@@ -113,12 +111,5 @@ internal static class LocalEndpoints
             : TypedResults.Ok(new LocalBatchResponse(rows.Count, rows));
     }
 
-    internal static LunarEclipse? FindEclipse(CalendarDate day, Astronomy.Shadow.ShadowModel model, TimeScaleConverter time)
-    {
-        var start = JulianDate.FromCalendar(day.Year, day.Month, day.Day, day.IsGregorian).Day;
-        return EclipseEndpoints.InDateRange(model, time, start, start + 1).FirstOrDefault();
-    }
 
-    private static Microsoft.AspNetCore.Http.HttpResults.ProblemHttpResult NoEclipse(string date, string model) =>
-        Problems.NotFound($"No lunar eclipse has its greatest phase on {date} (UTC) under the {model} shadow model.");
 }
