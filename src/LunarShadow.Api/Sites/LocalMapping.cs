@@ -53,13 +53,13 @@ internal static class LocalMapping
     public static List<TrackPointResponse> Track(LocalCircumstances l, double stepMinutes, TimeScaleConverter time)
     {
         var sky = new LocalSky(l.Eclipse.NightSky, l.Site, l.DeltaTSeconds);
-        var offset = l.Eclipse.GreatestEclipse.SecondsSince(TtInstant.FromJulianDate(time.ToUtc(l.Eclipse.GreatestEclipse).ToJulianDate()));
+        var toUtc = NightClock.For(l.Eclipse, time);
         var points = new List<TrackPointResponse>();
         for (var minutes = -480.0; minutes <= 480.0 + 1e-9; minutes += stepMinutes)
         {
             var h = minutes / 60;
             var moon = sky.MoonAt(h);
-            var utc = TimeFormats.FromJulianDate(sky.InstantAt(h).JulianDate.Day - offset / 86400);
+            var utc = toUtc(sky.InstantAt(h));
             points.Add(new TrackPointResponse(TimeFormats.Utc(utc), TimeFormats.Local(utc, l.Site.TimeZone).Text,
                 TimeFormats.Round(moon.ApparentAltitude.Degrees, 2), TimeFormats.Round(moon.Azimuth.Degrees, 2),
                 TimeFormats.Round(l.Site.Horizon.AltitudeAt(moon.Azimuth).Degrees, 2), TimeFormats.Round(sky.SunAltitudeAt(h).Degrees, 2)));

@@ -20,7 +20,7 @@ public static class PhotoPlanner
         var night = eclipse.NightSky;
         var passage = eclipse.Passage;
         var k = settings.ExtinctionPerAirMass ?? AtmosphericExtinction.CoefficientForHeight(site.Location.ElevationMeters);
-        var utcOffsetSeconds = eclipse.GreatestEclipse.SecondsSince(TtInstant.FromJulianDate(time.ToUtc(eclipse.GreatestEclipse).ToJulianDate()));
+        var toUtc = NightClock.For(eclipse, time);
 
         var visible = local.VisiblePhases.Where(p => p.Phase == EclipsePhase.Penumbral).ToList();
         var framing = Frame(sky, night, camera, settings, visible);
@@ -73,7 +73,7 @@ public static class PhotoPlanner
                 aimedAt = tt;
             }
             if (exposure.IsoClamped) warnings.Add("iso-out-of-range: the shutter given needs an ISO outside 25–409600");
-            var utc = NodaTime.Instant.FromUnixTimeTicks((long)Math.Round((tt.JulianDate.Day - utcOffsetSeconds / 86400 - 2440587.5) * 864_000_000_000.0));
+            var utc = toUtc(tt);
             return new TimelineRow(tt, utc, label, state, umbral, penumbral, moon.ApparentAltitude, moon.Azimuth, airMass,
                 Math.Log2(target * extinctionFactor), Math.Log2(limb), Math.Log2(disc), exposure, warnings);
         }

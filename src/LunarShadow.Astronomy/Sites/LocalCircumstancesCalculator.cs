@@ -18,7 +18,7 @@ public static class LocalCircumstancesCalculator
     public static LocalCircumstances Compute(LunarEclipse eclipse, Site site, TimeScaleConverter time)
     {
         var deltaT = time.DeltaTAt(eclipse.GreatestEclipse).Seconds;
-        var toUtc = NightClock(eclipse, time);
+        var toUtc = NightClock.For(eclipse, time);
         var sky = new LocalSky(eclipse.NightSky, site, deltaT);
         var night = eclipse.NightSky;
         double HoursOf(TtInstant tt) => night.HoursFromCenter(tt);
@@ -98,20 +98,6 @@ public static class LocalCircumstancesCalculator
 
     // The umbral magnitude rises to its greatest value and falls again, so its largest visible value is at greatest
     // eclipse when that is visible, otherwise at the visible moment nearest to it.
-    // TT − UTC is constant through the night unless a leap second falls in it; then every instant is converted in full.
-    private static Func<TtInstant, NodaTime.Instant> NightClock(LunarEclipse eclipse, TimeScaleConverter time)
-    {
-        var center = eclipse.GreatestEclipse;
-        var offset = center.JulianDate.Day - time.ToUtc(center).ToJulianDate();
-        var early = center.PlusSeconds(-EclipseNightSky.HalfWidthHours * 3600);
-        var late = center.PlusSeconds(EclipseNightSky.HalfWidthHours * 3600);
-        var steady = Math.Abs(early.JulianDate.Day - time.ToUtc(early).ToJulianDate() - offset) < 1e-3 / 86400
-            && Math.Abs(late.JulianDate.Day - time.ToUtc(late).ToJulianDate() - offset) < 1e-3 / 86400;
-        return steady
-            ? tt => NodaTime.Instant.FromUnixTimeTicks((long)Math.Round((tt.JulianDate.Day - offset - 2440587.5) * 864_000_000_000.0))
-            : time.ToUtc;
-    }
-
     private static MaxVisibleMagnitude? LargestVisibleMagnitude(LunarEclipse eclipse, LocalSky sky, List<VisibleSpan> phases, Func<TtInstant, NodaTime.Instant> toUtc)
     {
         var whole = phases.Where(p => p.Phase == EclipsePhase.Penumbral).ToList();
