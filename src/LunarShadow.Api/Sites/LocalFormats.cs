@@ -1,4 +1,5 @@
 using LunarShadow.Api.Formatting;
+using LunarShadow.Api.Shared;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Sites;
 
@@ -47,7 +48,7 @@ internal static class LocalFormats
         var calendar = new ICalendarWriter($"Lunar eclipse {response.Eclipse.Date} at {where}");
         foreach (var p in local.VisiblePhases.OrderBy(p => p.StartUtc))
         {
-            var phase = LocalMapping.PhaseName(p.Phase);
+            var phase = WireNames.Of(p.Phase);
             var uid = FormattableString.Invariant($"{response.Eclipse.Date}-{phase}-{p.StartUtc.ToUnixTimeSeconds()}-{site.Location.Latitude.Degrees:0.####}-{site.Location.Longitude.Degrees:0.####}@lunarshadow");
             calendar.Event(uid, local.Contacts.Single(c => c.Name is null).Utc, p.StartUtc, p.EndUtc,
                 $"Lunar eclipse ({response.Eclipse.Kind}): {phase} phase visible",
