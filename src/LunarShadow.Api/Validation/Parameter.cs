@@ -83,7 +83,15 @@ internal sealed record Parameter(string Name, ParameterType Type, string Descrip
     /// <summary>The number default, for reading.</summary>
     public double? NumberDefault => Default is double d ? d : Default is int i ? i : null;
 
-    /// <summary>The allowed range in words, e.g. "from 0 to 1200 hPa".</summary>
-    public string RangeText => FormattableString.Invariant(
-        $"{(MinimumExclusive ? "above" : "from")} {Minimum} {(MinimumExclusive ? "up to" : "to")} {Maximum}{(Unit.Length > 0 ? " " + Unit : "")}");
+    /// <summary>The allowed range in words, e.g. "from −90 to 90 degrees".</summary>
+    public string RangeText =>
+        $"{(MinimumExclusive ? "above" : "from")} {Text(Minimum)} {(MinimumExclusive ? "up to" : "to")} {Text(Maximum)}{(Unit.Length > 0 ? " " + Unit : "")}";
+
+    // A bound as prose writes it: the minus sign, not a hyphen.
+    private static string Text(double? value) => value switch
+    {
+        null => "",
+        < 0 => "−" + (-value.Value).ToString(System.Globalization.CultureInfo.InvariantCulture),
+        _ => value.Value.ToString(System.Globalization.CultureInfo.InvariantCulture),
+    };
 }

@@ -27,8 +27,9 @@ internal sealed class RequestFields(QueryReader reader, Func<string, string?> so
     public static RequestFields FromFields(IReadOnlyDictionary<string, string?> fields, QueryReader reader, string prefix = "") =>
         new(reader, name => fields.GetValueOrDefault(name), prefix);
 
-    /// <summary>The name a problem with the parameter is reported under.</summary>
-    public string FieldName(Parameter p) => prefix + p.Name;
+    /// <summary>The name a problem with the parameter is reported under: the (former) name the request used.</summary>
+    public string FieldName(Parameter p) =>
+        prefix + (string.IsNullOrWhiteSpace(source(p.Name)) ? p.FormerNames.FirstOrDefault(n => !string.IsNullOrWhiteSpace(source(n))) ?? p.Name : p.Name);
 
     /// <summary>The raw text under the parameter's name or a former name; null when absent.</summary>
     public string? Raw(Parameter p)
