@@ -4,7 +4,6 @@ using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Sites;
 using LunarShadow.Astronomy.Time;
-using LunarShadow.Astronomy.Units;
 using NodaTime;
 
 namespace LunarShadow.Api.Sites;
