@@ -29,7 +29,7 @@ internal static class LocalFormats
             double Minutes(string phase) => r.VisiblePhases.Where(p => p.Phase == phase).Sum(p => p.Minutes);
             csv.Row(r.Site.Name, r.Site.LatitudeDegrees, r.Site.LongitudeDegrees, r.Site.TimeZone, r.Eclipse.Date, whole.Count > 0 ? "true" : "false",
                 whole.FirstOrDefault()?.StartUtc, whole.LastOrDefault()?.EndUtc, Minutes("penumbral"), Minutes("partial"), Minutes("total"),
-                r.MaxVisibleUmbralMagnitude?.Value, r.MaxVisibleUmbralMagnitude?.Utc, r.MaxVisibleUmbralMagnitude?.AltitudeDegrees, r.MoonHorizon, r.Summary);
+                r.GreatestVisibleUmbralMagnitude?.Value, r.GreatestVisibleUmbralMagnitude?.Utc, r.GreatestVisibleUmbralMagnitude?.AltitudeDegrees, r.MoonHorizon, r.Summary);
         }
         return csv.ToString();
     }

@@ -82,7 +82,7 @@ internal static class UpcomingEndpoints
             var greatest = time.ToUtc(u.Local.Eclipse.GreatestEclipse);
             return new UpcomingItem(full.Eclipse.Date, full.Eclipse.Kind, TimeFormats.Utc(greatest), TimeFormats.Local(greatest, site.Site.TimeZone).Text,
                 TimeFormats.Round(u.QualifyingMinutes, 2), u.Qualifying.Select(q => LocalMapping.Phase(q, site.Site.TimeZone)).ToList(),
-                full.MaxVisibleUmbralMagnitude, full.Summary);
+                full.GreatestVisibleUmbralMagnitude, full.Summary);
         }).ToList();
         var note = items.Count < wanted
             ? $"Only {items.Count} such eclipses in the {UpcomingEclipses.MaxYearsAhead} years searched (or up to the year {SupportedRange.LastYear})."
@@ -110,7 +110,7 @@ internal static class UpcomingEndpoints
         var csv = new CsvWriter().Row("date", "kind", "greatest_utc", "greatest_local", "qualifying_minutes", "first_qualifying_utc", "last_qualifying_utc", "max_visible_umbral_magnitude", "summary");
         foreach (var i in items)
             csv.Row(i.Date, i.Kind, i.GreatestEclipseUtc, i.GreatestEclipseLocal, i.QualifyingMinutes, i.Qualifying.Count > 0 ? i.Qualifying[0].StartUtc : null,
-                i.Qualifying.Count > 0 ? i.Qualifying[^1].EndUtc : null, i.MaxVisibleUmbralMagnitude?.Value, i.Summary);
+                i.Qualifying.Count > 0 ? i.Qualifying[^1].EndUtc : null, i.GreatestVisibleUmbralMagnitude?.Value, i.Summary);
         return csv.ToString();
     }
 
