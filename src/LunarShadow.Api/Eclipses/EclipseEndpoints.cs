@@ -44,9 +44,7 @@ internal static class EclipseEndpoints
             .WithDescription("The eclipse whose greatest phase falls on the given UTC date (YYYY-MM-DD; Julian calendar before 1582-10-15, astronomical year numbering). 404 when there is none.")
             .Takes(new EndpointParameters([Parameters.EclipseDate, .. Parameters.Model, Formats.Parameter]))
             .Produces<EclipseResponse>(StatusCodes.Status200OK, "application/json", "text/csv")
-            .ProducesValidationProblem()
-            .ProducesProblem(StatusCodes.Status404NotFound)
-            .ProducesProblem(StatusCodes.Status406NotAcceptable);
+            .ProducesEclipseProblems();
         return routes;
     }
 

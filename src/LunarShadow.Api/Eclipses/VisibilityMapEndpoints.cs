@@ -20,9 +20,7 @@ internal static class VisibilityMapEndpoints
             .WithSummary("Where on Earth the eclipse can be seen, as GeoJSON")
             .WithDescription("An RFC 7946 FeatureCollection: for each contact (and greatest eclipse) a MultiPolygon of where the Moon is above the horizon then, plus 'whole-eclipse' (above the horizon at both P1 and P4) and 'whole-totality' (at both U2 and U3). Computed on a 1° grid on a spherical Earth at sea level with standard refraction.")
             .Produces<VisibilityMapDocument>(StatusCodes.Status200OK, "application/geo+json", "application/json")
-            .ProducesValidationProblem()
-            .ProducesProblem(StatusCodes.Status404NotFound)
-            .ProducesProblem(StatusCodes.Status406NotAcceptable);
+            .ProducesEclipseProblems();
         return routes;
     }
 

@@ -22,9 +22,7 @@ internal static class PhotoEndpoints
             .WithSummary("Exposure and framing timeline for one eclipse, site and camera")
             .WithDescription("Rows at every visible contact and every interval: phase, umbral and penumbral fraction, Moon altitude, air mass, predicted brightness in stops, suggested exposure and bracket, warnings; plus framing and sequences. JSON, CSV (timeline), iCalendar (shooting windows with alarms) or format=sequence (a plain list of exposures for a camera-control script).")
             .Produces<PhotoPlanResponse>(StatusCodes.Status200OK, "application/json", "text/csv", "text/calendar", "application/vnd.lunarshadow.sequence+json")
-            .ProducesValidationProblem()
-            .ProducesProblem(StatusCodes.Status404NotFound)
-            .ProducesProblem(StatusCodes.Status406NotAcceptable);
+            .ProducesEclipseProblems();
         group.MapPost("/", Post)
             .WithName("PostPhotoPlan")
             .Takes(new EndpointParameters([Parameters.EclipseDate, Formats.Parameter], [.. Parameters.Site, .. PhotoParameters.Camera, .. Parameters.Model]))

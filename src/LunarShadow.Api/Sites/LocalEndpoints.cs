@@ -35,9 +35,7 @@ internal static class LocalEndpoints
             .WithSummary("What one site sees of an eclipse")
             .WithDescription("Contacts in UTC and local time with the Moon's altitude and azimuth, visibility, the Sun's altitude and sky state; moonrise, moonset and horizon-profile events; the visible part of each phase; the largest visible umbral magnitude; a plain summary; and with open=, a public-night plan. JSON, CSV (contact table) or iCalendar (one event per visible phase) by Accept or format=.")
             .Produces<LocalResponse>(StatusCodes.Status200OK, "application/json", "text/csv", "text/calendar")
-            .ProducesValidationProblem()
-            .ProducesProblem(StatusCodes.Status404NotFound)
-            .ProducesProblem(StatusCodes.Status406NotAcceptable);
+            .ProducesEclipseProblems();
         group.MapPost("/", Post)
             .WithName("GetLocalCircumstancesForManySites")
             .Takes(new EndpointParameters([Parameters.EclipseDate, BatchFormats.Parameter], Parameters.Model, BatchBody.SitesName, Parameters.Site, MaxSitesPerBatch))
