@@ -38,7 +38,7 @@ internal static class ServiceRegistration
         builder.Services.ConfigureHttpJsonOptions(options =>
         {
             options.SerializerOptions.NumberHandling = JsonNumberHandling.Strict;
-            options.SerializerOptions.Converters.Add(new JsonStringEnumConverter(Shared.WireNames.Policy, allowIntegerValues: false));
+            options.SerializerOptions.Converters.Add(new JsonStringEnumConverter(Common.WireNames.Policy, allowIntegerValues: false));
         });
         // Parameters, bodies and response enums come from the same tables the handlers and mappings use.
         builder.Services.AddOpenApi("v1", options => options.AddSchemaTransformer<TimeSchemaTransformer>()

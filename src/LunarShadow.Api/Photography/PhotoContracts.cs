@@ -11,7 +11,7 @@ namespace LunarShadow.Api.Photography;
 /// <param name="Sequences">Multi-exposure and time-lapse plans (null when nothing is visible).</param>
 /// <param name="Cautions">Safety notes.</param>
 public sealed record PhotoPlanResponse(
-    Sites.SiteEcho Site, Sites.EclipseBrief Eclipse, CameraEcho Camera, string Summary, BrightnessModelEcho Model,
+    Common.SiteEcho Site, Common.EclipseBrief Eclipse, CameraEcho Camera, string Summary, BrightnessModelEcho Model,
     IReadOnlyList<TimelineRowResponse> Timeline, FramingResponse Framing, SequencesResponse? Sequences, IReadOnlyList<string> Cautions);
 
 /// <summary>The camera as understood.</summary>

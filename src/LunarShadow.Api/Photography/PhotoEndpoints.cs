@@ -1,7 +1,6 @@
 using System.Text.Json;
 using LunarShadow.Api.Formatting;
-using LunarShadow.Api.Shared;
-using LunarShadow.Api.Sites;
+using LunarShadow.Api.Common;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Photography;
 

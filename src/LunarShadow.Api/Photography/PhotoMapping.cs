@@ -1,6 +1,5 @@
 using LunarShadow.Api.Formatting;
-using LunarShadow.Api.Shared;
-using LunarShadow.Api.Sites;
+using LunarShadow.Api.Common;
 using LunarShadow.Astronomy.Photography;
 using LunarShadow.Astronomy.Time;
 

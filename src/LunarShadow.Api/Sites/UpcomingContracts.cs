@@ -1,3 +1,5 @@
+using LunarShadow.Api.Common;
+
 namespace LunarShadow.Api.Sites;
 
 /// <summary>The next eclipses a site can see.</summary>

@@ -1,7 +1,7 @@
 using System.Text.Json;
 using LunarShadow.Astronomy.Eclipses;
 
-namespace LunarShadow.Api.Shared;
+namespace LunarShadow.Api.Common;
 
 /// <summary>
 /// The one naming policy for enum values on the wire: kebab-case lower ("civil-twilight", "hidden-by-horizon-profile").

@@ -1,10 +1,9 @@
 using LunarShadow.Api.Formatting;
-using LunarShadow.Api.Shared;
 using LunarShadow.Astronomy.Sites;
 using LunarShadow.Astronomy.Time;
 using NodaTime;
 
-namespace LunarShadow.Api.Sites;
+namespace LunarShadow.Api.Common;
 
 /// <summary>Turns local circumstances into contracts, CSV and iCalendar.</summary>
 internal static class LocalMapping

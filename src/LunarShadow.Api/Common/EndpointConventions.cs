@@ -1,4 +1,4 @@
-namespace LunarShadow.Api.Shared;
+namespace LunarShadow.Api.Common;
 
 /// <summary>OpenAPI conventions several feature endpoints share.</summary>
 internal static class EndpointConventions

@@ -1,9 +1,8 @@
 using LunarShadow.Api.Formatting;
-using LunarShadow.Api.Shared;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Sites;
 
-namespace LunarShadow.Api.Sites;
+namespace LunarShadow.Api.Common;
 
 /// <summary>CSV and iCalendar representations of local circumstances.</summary>
 internal static class LocalFormats

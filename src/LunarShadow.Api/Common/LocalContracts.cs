@@ -1,4 +1,4 @@
-namespace LunarShadow.Api.Sites;
+namespace LunarShadow.Api.Common;
 
 /// <summary>What one site sees of one eclipse.</summary>
 /// <param name="Site">The site as understood (echo).</param>

@@ -4,7 +4,7 @@ using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Shadow;
 using LunarShadow.Astronomy.Time;
 
-namespace LunarShadow.Api.Shared;
+namespace LunarShadow.Api.Common;
 
 /// <summary>
 /// The step every per-eclipse endpoint shares: read the date, the computation choices and the format; refuse bad input

@@ -1,7 +1,7 @@
 using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Validation;
 
-namespace LunarShadow.Api.Shared;
+namespace LunarShadow.Api.Common;
 
 /// <summary>The representations one endpoint offers, and its <c>format</c> parameter listing their names.</summary>
 internal sealed class FormatOffer(params OutputFormat[] formats)
