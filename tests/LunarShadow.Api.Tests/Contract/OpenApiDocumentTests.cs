@@ -26,6 +26,14 @@ public class OpenApiDocumentTests(ApiFactory factory) : IClassFixture<ApiFactory
     // Free text read by its own rule: each is documented with a pattern or a length limit instead.
     private static readonly string[] TextParameters = ["tz", "horizon", "name", "open", "sensor"];
 
+    [Fact]
+    public async Task The_document_is_built_once_and_then_served_from_the_cache()
+    {
+        await _client.GetStringAsync("/openapi/v1.json");
+        var again = await _client.GetAsync("/openapi/v1.json");
+        Assert.True(again.Headers.Age is not null, "a second request should be answered from the output cache (Age header)");
+    }
+
     private async Task<OpenApiDocument> Document()
     {
         await using var stream = await _client.GetStreamAsync("/openapi/v1.json");
