@@ -62,11 +62,8 @@ internal static class UpcomingEndpoints
         if (start is { } s && s.Year > SupportedRange.LastYear - 1) f.Fail(From, $"from must be before {SupportedRange.LastYear}-01-01 to leave room to search.");
         if (!f.Reader.IsValid || site is null || start is null) return Problems.InvalidQuery(f.Reader);
         if (output is null) return Problems.NotAcceptable(Formats.Formats);
-        var hours = site.Hours;
-        var reader = f.Reader;
-        var open = f.Raw(Parameters.Open);
 
-        var criteria = new UpcomingCriteria(Enum.GetValues<EclipsePhase>().First(p => WireNames.Of(p) == phaseName), nightOnly, null, hours);
+        var criteria = new UpcomingCriteria(Enum.GetValues<EclipsePhase>().First(p => WireNames.Of(p) == phaseName), nightOnly, null, site.Hours);
         var startTt = TtInstant.FromJulianDate(JulianDate.FromCalendar(start.Value.Year, start.Value.Month, start.Value.Day, start.Value.IsGregorian).Day);
         var aborted = request.HttpContext.RequestAborted;
         var found = UpcomingEclipses.From(EclipseFinder.For(model), site.Site, time, startTt, criteria)
@@ -88,13 +85,13 @@ internal static class UpcomingEndpoints
             ? $"Only {items.Count} such eclipses in the {UpcomingEclipses.MaxYearsAhead} years searched (or up to the year {SupportedRange.LastYear})."
             : null;
         var response = new UpcomingResponse(LocalMapping.Echo(site.Site),
-            new UpcomingCriteriaEcho(start.Value.ToIsoDateString(), wanted, phaseName, criteria.AstronomicalNightOnly, site.Site.MinimumAltitude.Degrees, open?.Trim(), model.Name),
+            new UpcomingCriteriaEcho(start.Value.ToIsoDateString(), wanted, phaseName, criteria.AstronomicalNightOnly, site.Site.MinimumAltitude.Degrees, f.Raw(Parameters.Open)?.Trim(), model.Name),
             items.Count, items, note);
 
         return output switch
         {
             OutputFormat.Csv => Results.Text(Csv(items), ContentNegotiation.MediaType(OutputFormat.Csv)),
-            OutputFormat.Calendar => Calendar(found, site.Site, time, reader),
+            OutputFormat.Calendar => Calendar(found, site.Site, time, f.Reader),
             _ => TypedResults.Ok(response),
         };
     }
