@@ -88,7 +88,8 @@ async function showError(error, date, s) {
   $('result').hidden = true;
   $('photo').hidden = true;
   $('error').hidden = false;
-  $('error-message').textContent = error.message;
+  // A missing eclipse: say so in plain words; the nearest eclipses follow as links.
+  $('error-message').textContent = error.status === 404 ? `${error.message.split('. ')[0]}.` : error.message;
   const fields = $('error-fields');
   fields.innerHTML = '';
   for (const [field, messages] of Object.entries(error.fields ?? {})) {
@@ -97,6 +98,7 @@ async function showError(error, date, s) {
     for (const m of messages) fields.appendChild(Object.assign(document.createElement('li'), { textContent: m }));
   }
   $('nearest').hidden = true;
+  if (location.search) $('error').scrollIntoView({ block: 'start' });
   if (error.status === 404 && /^-?\d{4}-\d\d-\d\d$/.test(date)) {
     try {
       const around = await getJson(eclipsesUrl(shiftYears(date, -2), shiftYears(date, 2)));
@@ -158,6 +160,7 @@ export async function show(event) {
     exportsFor(date, s);
     loadEclipses(s);
     showPhotoSection(date, s);
+    if (event) $('result').scrollIntoView({ block: 'start' });
   } catch (error) {
     await showError(error instanceof ApiError ? error : new ApiError(String(error.message ?? error), 0), date, s);
   }
@@ -200,7 +203,7 @@ function exportsFor(date, s) {
 }
 
 // The card's own height at 420 px wide with seven contacts (measured); the card also posts its height to the host.
-export const EMBED_SIZE = { width: 420, height: 470 };
+export const EMBED_SIZE = { width: 420, height: 500 };
 
 function embedSnippet(date, s) {
   const q = siteQuery(s);

@@ -11,7 +11,7 @@ const date = params.get('date') ?? '';
 $('more').href = `/?${params}`;
 
 function reportHeight() {
-  if (window.parent !== window) window.parent.postMessage({ type: 'lunarshadow:height', height: Math.ceil(document.documentElement.scrollHeight) }, '*');
+  if (window.parent !== window) window.parent.postMessage({ type: 'lunarshadow:height', height: Math.ceil(document.querySelector('main').getBoundingClientRect().bottom) + 4 }, '*');
 }
 new ResizeObserver(reportHeight).observe(document.body);
 

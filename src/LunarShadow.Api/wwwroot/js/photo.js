@@ -34,10 +34,17 @@ async function fetchPlan(date, site, extra = {}) {
   }
 }
 
+/** Shows the camera set-up for a new eclipse or site; the plan is drawn when the photographer asks for it. */
 export function showPhotoSection(date, site) {
+  const same = current && current.date === date && JSON.stringify(current.site) === JSON.stringify(site);
   current = { date, site };
   $('photo').hidden = false;
-  return plan();
+  if (!same) {
+    $('photo-result').hidden = true;
+    $('photo-error').hidden = true;
+  } else if (lastPlan) {
+    plan();
+  }
 }
 
 async function plan(event) {

@@ -26,11 +26,15 @@ export function utcOffsetText(minutes) {
 /** The zone's short name at an instant ('CET', 'EDT'), or the UTC offset where Intl has no name. */
 export function zoneAbbreviation(timeZone, utcMs, offset, given) {
   if (given) return given;
-  try {
-    const parts = new Intl.DateTimeFormat('en-GB', { timeZone, timeZoneName: 'short' }).formatToParts(new Date(utcMs));
-    const name = parts.find((p) => p.type === 'timeZoneName')?.value;
-    if (name && !/^(GMT|UTC)[+−-]/.test(name)) return name;
-  } catch { /* an id this browser does not know: fall back to the offset */ }
+  // Intl names a zone only in locales where it is in common use, so ask a few English-speaking ones.
+  for (const locale of ['en-GB', 'en-US', 'en-AU', 'en-NZ', 'en-IE', 'en-IN', 'en-ZA', 'en-CA']) {
+    try {
+      const parts = new Intl.DateTimeFormat(locale, { timeZone, timeZoneName: 'short' }).formatToParts(new Date(utcMs));
+      const name = parts.find((p) => p.type === 'timeZoneName')?.value;
+      if (name && !/^(GMT|UTC)/.test(name)) return name;
+      if (name === 'GMT' || name === 'UTC') return name;
+    } catch { return utcOffsetText(offset); /* an id this browser does not know */ }
+  }
   return utcOffsetText(offset);
 }
 

@@ -81,13 +81,15 @@ export function drawTimeline(svg, local, eclipse) {
   }
 
   // Altitude grid and labels.
+  let lowest = 90;
   for (let alt = 90; alt >= lo; alt -= 30) {
     const yy = y(alt);
     svg.appendChild(el('line', { x1: left, x2: W - right, y1: yy, y2: yy, class: alt === 0 ? 'horizon-line' : 'grid-line' }));
     svg.appendChild(el('text', { x: left - 6, y: yy + 4, 'text-anchor': 'end', class: 'chart-label altitude-label' }, `${alt}°`));
+    lowest = alt;
   }
-  if (lo % 30 !== 0 && y(lo) - y(lo + (((-lo) % 30) || 30)) > 16) {
-    svg.appendChild(el('text', { x: left - 6, y: y(lo) - 2, 'text-anchor': 'end', class: 'chart-label altitude-label' }, `${lo}°`));
+  if (lo < lowest && y(lo) - y(lowest) >= 16) {
+    svg.appendChild(el('text', { x: left - 6, y: y(lo) - 1, 'text-anchor': 'end', class: 'chart-label altitude-label' }, `${lo}°`));
   }
 
   // The local horizon profile, and the Moon: solid while it is above it, dashed below.
@@ -120,7 +122,7 @@ export function drawTimeline(svg, local, eclipse) {
     if (!c[a] || !c[b]) return;
     svg.appendChild(el('rect', { x: x(ms(c[a])), y: yy, width: Math.max(1, x(ms(c[b])) - x(ms(c[a]))), height: bar, fill: PHASE[phase], opacity: 0.35, class: `phase-${phase}` }));
     for (const v of local.visiblePhases.filter((p) => p.phase === phase)) {
-      svg.appendChild(el('rect', { x: x(ms(v.startUtc)), y: yy, width: Math.max(1.5, x(ms(v.endUtc)) - x(ms(v.startUtc))), height: bar, fill: PHASE[phase], class: `visible-${phase}` }));
+      svg.appendChild(el('rect', { x: x(ms(v.startUtc)), y: yy, width: Math.max(3, x(ms(v.endUtc)) - x(ms(v.startUtc))), height: bar, fill: PHASE[phase], class: `visible-${phase}` }));
     }
   });
 
