@@ -42,22 +42,23 @@ export function drawTimeAxis(svg, scale, offsetAt, timeZone, top, bottom, zoneGi
   // Second row: the local date at the start and at every midnight; the zone's name at the right end.
   const row2 = bottom + 38;
   const placed = [];
-  const put = (text, px, anchor, cls) => {
-    const b = box(px, row2, textWidth(text), anchor);
+  const put = (text, px, anchor, cls, row = row2) => {
+    const b = box(px, row, textWidth(text), anchor);
     if (b.x0 < 0 || b.x1 > scale.width || placed.some((o) => intersects(o, b))) return false;
     placed.push(b);
-    g.appendChild(el('text', { x: px, y: row2, 'text-anchor': anchor, class: `chart-label ${cls}` }, text));
+    g.appendChild(el('text', { x: px, y: row, 'text-anchor': anchor, class: `chart-label ${cls}` }, text));
     return true;
   };
   const midOffset = offsetAt((t0 + t1) / 2);
   const zone = zoneAbbreviation(timeZone, (t0 + t1) / 2, midOffset, zoneGiven);
   const zoneText = zone.startsWith('UTC') ? `local time, ${zone}` : `local time, ${zone} (${utcOffsetText(midOffset)})`;
-  put(zoneText, x(t1), 'end', 'zone-label');
+  // The zone on its own row, so that it is never crowded out by a date.
+  put(zoneText, x(t1), 'end', 'zone-label', row2 + 17);
   for (const h of hours.filter((h) => h.hour === 0)) {
     const date = new Date(h.local).toISOString().slice(0, 10);
     put(`▸ ${longDate(date, false)}`, x(h.t), 'start', 'date-label');
   }
   const startDate = new Date(t0 + offsetAt(t0) * 60000).toISOString().slice(0, 10);
   put(longDate(startDate, false), x(t0), 'start', 'date-label');
-  return 44;
+  return 60;
 }

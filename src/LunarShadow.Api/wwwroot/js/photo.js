@@ -79,7 +79,7 @@ export function drawExposure(svg, p) {
   if (rows.length < 2) { reset(svg, 'No visible eclipse to expose for', W, 40); return; }
   const left = 62, right = 12, top = 10, plotHeight = W < 560 ? 170 : 210;
   const bottom = top + plotHeight;
-  reset(svg, 'Suggested shutter time through the eclipse', W, bottom + 48);
+  reset(svg, 'Suggested shutter time through the eclipse', W, bottom + 64);
   const t0 = Date.parse(rows[0].utc), t1 = Date.parse(rows[rows.length - 1].utc);
   const x = (t) => left + (t - t0) / (t1 - t0 || 1) * (W - left - right);
   const shutters = rows.flatMap((r) => [r.exposure.shutterSeconds, ...r.exposure.bracketShutterSeconds]).filter((s) => s > 0 && Number.isFinite(s));

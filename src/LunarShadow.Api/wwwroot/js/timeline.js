@@ -49,7 +49,7 @@ export function drawTimeline(svg, local, eclipse) {
   const top = barsTop + barRows.length * (bar + 3) + 4;
   const plotHeight = W < 560 ? 170 : 210;
   const bottom = top + plotHeight;
-  const H = bottom + 48;
+  const H = bottom + 64;
   reset(svg, 'The Moon\'s altitude through the night, in local time', W, H);
 
   const altitudes = track.map((p) => Math.min(p.moonAltitudeDegrees, p.horizonAltitudeDegrees));
@@ -88,7 +88,7 @@ export function drawTimeline(svg, local, eclipse) {
     svg.appendChild(el('text', { x: left - 6, y: yy + 4, 'text-anchor': 'end', class: 'chart-label altitude-label' }, `${alt}°`));
     lowest = alt;
   }
-  if (lo < lowest && y(lo) - y(lowest) >= 16) {
+  if (lo < lowest && y(lo) - y(lowest) >= 24) {
     svg.appendChild(el('text', { x: left - 6, y: y(lo) - 1, 'text-anchor': 'end', class: 'chart-label altitude-label' }, `${lo}°`));
   }
 
