@@ -31,7 +31,7 @@ export function nightSpan(local, eclipse) {
 export function drawTimeline(svg, local, eclipse) {
   const W = widthOf(svg);
   const [t0, t1] = nightSpan(local, eclipse);
-  const track = local.track.filter((p) => ms(p.utc) >= t0 - 600000 && ms(p.utc) <= t1 + 600000);
+  const track = local.track.filter((p) => ms(p.utc) >= t0 && ms(p.utc) <= t1);
   const left = 46, right = 12;
   const x = (t) => left + (t - t0) / (t1 - t0) * (W - left - right);
   const scale = { x, t0, t1, width: W };
