@@ -68,6 +68,11 @@ public class PageTests(BrowserFixture fixture)
         var other = await s.Page.EvaluateAsync<string>("[...document.querySelectorAll('#eclipse option')].map((o) => o.value).find((v) => v && v !== '2029-12-20')");
         await s.Page.SelectOptionAsync("#eclipse", other);
         Assert.Equal(other, await s.Page.InputValueAsync("#eclipse-date"));
+        // The site marker sits at the map's centre column, inside the frame.
+        Assert.True(await s.Page.EvaluateAsync<bool>("""
+            (() => { const m = document.querySelector('#world-map .site').getBoundingClientRect(), f = document.querySelector('#world-map').getBoundingClientRect();
+              return m.left >= f.left && m.right <= f.right && m.top >= f.top && m.bottom <= f.bottom && Math.abs((m.left + m.right) / 2 - (f.left + f.right) / 2) < 2; })()
+            """));
         // The long totality (54 min): no label overlaps another in any chart.
         await AssertNoLabelOverlapsAsync(s, width, "2029-12-20");
         Assert.Empty(s.Errors);

@@ -137,5 +137,5 @@ export function drawTimeline(svg, local, eclipse) {
   });
 
   const offsets = offsetLookup(local.track.map((p) => p.local));
-  drawTimeAxis(svg, scale, offsets, local.site.timeZone, top, bottom, local.site.zoneAbbreviation ?? local.zoneAbbreviation);
+  drawTimeAxis(svg, scale, offsets, local.site.timeZone, top, bottom, local.site.zoneAbbreviation ?? local.zoneAbbreviation ?? local.contacts[0]?.zoneAbbreviation);
 }
