@@ -23,7 +23,7 @@ public sealed class PageSession(IBrowserContext context, IPage page) : IAsyncDis
         page.Console += (_, message) =>
         {
             // Chromium logs every 4xx answer as a console error; the error states are meant to get them.
-            if (message.Type == "error" && !message.Text.Contains("status of 4", StringComparison.Ordinal)) session.Errors.Add(message.Text);
+            if (message.Type == "error" && !message.Text.Contains("status of 4", StringComparison.Ordinal)) session.Errors.Add($"{message.Text} ({message.Location})");
         };
         page.PageError += (_, error) => session.Errors.Add(error);
         await page.GotoAsync(new Uri(fixture.Service.BaseAddress, path).ToString());
