@@ -89,7 +89,9 @@ async function showError(error, date, s) {
   $('photo').hidden = true;
   $('error').hidden = false;
   // A missing eclipse: say so in plain words; the nearest eclipses follow as links.
-  $('error-message').textContent = error.status === 404 ? `${error.message.split('. ')[0]}.` : error.message;
+  const named = Object.keys(error.fields ?? {}).length > 0;
+  $('error-message').textContent = error.status === 404 ? `${error.message.split('. ')[0]}.`
+    : named ? 'Please correct the marked fields:' : error.message;
   const fields = $('error-fields');
   fields.innerHTML = '';
   for (const [field, messages] of Object.entries(error.fields ?? {})) {
