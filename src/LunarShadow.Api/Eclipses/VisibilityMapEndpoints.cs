@@ -18,7 +18,7 @@ internal static class VisibilityMapEndpoints
             .WithName("GetVisibilityMap")
             .Takes(new EndpointParameters([Parameters.EclipseDate, .. Parameters.Model, Formats.Parameter]))
             .WithSummary("Where on Earth the eclipse can be seen, as GeoJSON")
-            .WithDescription("An RFC 7946 FeatureCollection: for each contact (and greatest eclipse) a MultiPolygon of where the Moon is above the horizon then, plus 'whole-eclipse' (above the horizon at both P1 and P4) and 'whole-totality' (at both U2 and U3). Computed on a 1° grid on a spherical Earth at sea level with standard refraction.")
+            .WithDescription("An RFC 7946 FeatureCollection: for each contact (and greatest eclipse) a MultiPolygon of where the Moon is above the horizon then, plus 'whole-eclipse' (above the horizon at both P1 and P4) and 'whole-totality' (at both U2 and U3). Computed on a 1° grid on a spherical Earth at sea level with standard refraction; the cells are merged and their outlines simplified to within 0.75° (pieces split at ±180° meet exactly there).")
             .Produces<VisibilityMapDocument>(StatusCodes.Status200OK, "application/geo+json", "application/json")
             .ProducesEclipseProblems();
         return routes;
@@ -33,7 +33,7 @@ internal static class VisibilityMapEndpoints
 
         var regions = VisibilityMap.Compute(eclipse, time.DeltaTAt(eclipse.GreatestEclipse).Seconds);
         var features = regions.Select(r => new GeoJsonFeature(
-            new GeoJsonMultiPolygon(r.Boxes.Select(b => new[] { new[] { new[] { b.West, b.South }, new[] { b.East, b.South }, new[] { b.East, b.North }, new[] { b.West, b.North }, new[] { b.West, b.South } } }).ToList()),
+            new GeoJsonMultiPolygon(VisibilityOutlines.Outline(r.Boxes, VisibilityMap.ResolutionDegrees)),
             new VisibilityProperties(r.Name, Describe(r.Name), r.Tt is { } tt ? TimeFormats.Utc(time.ToUtc(tt)) : null, VisibilityMap.ResolutionDegrees))).ToList();
         var collection = new VisibilityMapDocument(features, WireNames.Of(eclipse.Kind), TimeFormats.UtcDate(time.ToUtc(eclipse.GreatestEclipse)), model.Name);
         return Results.Json(collection, contentType: ContentNegotiation.MediaType(query.Output!.Value));
