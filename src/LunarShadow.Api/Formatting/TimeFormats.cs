@@ -31,10 +31,7 @@ internal static partial class TimeFormats
         var sign = seconds < 0 ? '-' : '+';
         var abs = Math.Abs(seconds);
         var text = Write(instant.ToJulianDate() + seconds / 86400.0, string.Create(CultureInfo.InvariantCulture, $"{sign}{abs / 3600:00}:{abs / 60 % 60:00}"));
-        string? note = null;
-        if (zone != DateTimeZone.Utc && zone.MapLocal(instant.InZone(zone).LocalDateTime).Count > 1)
-            note = string.Create(CultureInfo.InvariantCulture, $"This local time occurs twice (clocks go back); the one at UTC{sign}{abs / 3600:00}:{abs / 60 % 60:00} is meant.");
-        return (text, note);
+        return (text, SiteWording.RepeatedTimeNote(instant, zone));
     }
 
     /// <summary>The calendar date (astronomers' calendar) of a UTC instant, YYYY-MM-DD.</summary>

@@ -16,12 +16,11 @@ internal static class PhotoMapping
         var f = plan.Framing;
         var s = plan.Sequences;
         return new PhotoPlanResponse(
-            local.Site, local.Eclipse,
+            local.Site, local.Eclipse, local.Night,
             new CameraEcho(c.SensorWidthMm, c.SensorHeightMm, TimeFormats.Round(c.PixelPitchMicrons, 3), c.EffectiveFocalLengthMm, c.EffectiveAperture,
                 c.ShutterSeconds is null ? c.Iso : null, c.ShutterSeconds, MountName(c.Mount)),
             local.Summary,
-            new BrightnessModelEcho(plan.Settings.Danjon, TimeFormats.Round(plan.ExtinctionPerAirMass, 4), plan.UncertaintyStops,
-                "Brightness is computed from the shadow geometry and the uneclipsed Moon; inside the umbra it is an estimate from the expected Danjon L, good to about ±1.5 stops. Bracket, and check the histogram."),
+            new BrightnessModelEcho(plan.Settings.Danjon, TimeFormats.Round(plan.ExtinctionPerAirMass, 4), plan.UncertaintyStops, SiteWording.BrightnessModelNote),
             plan.Timeline.Select(r => new TimelineRowResponse(
                 TimeFormats.Utc(r.Utc), TimeFormats.Local(r.Utc, zone).Text, r.Contact, PhaseName(r.Phase),
                 TimeFormats.Round(r.UmbralFraction, 4), TimeFormats.Round(r.PenumbralFraction, 4),

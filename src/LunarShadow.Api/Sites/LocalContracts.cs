@@ -3,6 +3,7 @@ namespace LunarShadow.Api.Sites;
 /// <summary>What one site sees of one eclipse.</summary>
 /// <param name="Site">The site as understood (echo).</param>
 /// <param name="Eclipse">The eclipse.</param>
+/// <param name="Night">The local dates of the night that holds the visible part (or greatest eclipse when nothing is seen).</param>
 /// <param name="DeltaTSeconds">ΔT used, seconds.</param>
 /// <param name="DeltaTUncertaintySeconds">Its one-sigma uncertainty, seconds.</param>
 /// <param name="Contacts">P1, U1, U2, greatest, U3, U4, P4 as they occur, seen from the site.</param>
@@ -11,13 +12,14 @@ namespace LunarShadow.Api.Sites;
 /// <param name="VisiblePhases">Visible stretches of each phase: penumbral (P1–P4), partial (U1–U4), total (U2–U3).</param>
 /// <param name="VisibleTotalityMinutes">Minutes of totality visible from the site.</param>
 /// <param name="MaxVisibleUmbralMagnitude">Largest umbral magnitude seen, or null when nothing is seen.</param>
-/// <param name="Summary">One plain line on what the site sees.</param>
+/// <param name="Summary">One plain line on what the site sees, naming the night, the zone and what is missed.</param>
 /// <param name="PublicNight">The plan within the opening hours, when <c>open</c> was given.</param>
 /// <param name="Cautions">Safety notes that apply to this night.</param>
 /// <param name="Track">The Moon's and Sun's altitude through the night, when <c>track</c> was asked for.</param>
 public sealed record LocalResponse(
     SiteEcho Site,
     EclipseBrief Eclipse,
+    NightResponse Night,
     double DeltaTSeconds,
     double DeltaTUncertaintySeconds,
     IReadOnlyList<LocalContactResponse> Contacts,
@@ -46,12 +48,18 @@ public sealed record TrackPointResponse(string Utc, string Local, double MoonAlt
 /// <param name="LongitudeDegrees">Longitude, degrees.</param>
 /// <param name="ElevationMeters">Height, metres.</param>
 /// <param name="TimeZone">IANA time zone used.</param>
+/// <param name="TimeZoneAbbreviations">The zone's abbreviations in force on the night(s) concerned, from the tzdb (e.g. CEST and CET on a night the clocks go back; UTC+14:00 where the tzdb has no letters).</param>
 /// <param name="MinAltitudeDegrees">Minimum useful altitude of the Moon's upper limb, degrees.</param>
 /// <param name="Horizon">Horizon-profile points, if any.</param>
 /// <param name="Hint">A hint about defaults that were applied, if any.</param>
 public sealed record SiteEcho(
     string? Name, double LatitudeDegrees, double LongitudeDegrees, double ElevationMeters, string TimeZone,
-    double MinAltitudeDegrees, IReadOnlyList<HorizonPointResponse> Horizon, string? Hint);
+    IReadOnlyList<string> TimeZoneAbbreviations, double MinAltitudeDegrees, IReadOnlyList<HorizonPointResponse> Horizon, string? Hint);
+
+/// <summary>A night named by its local calendar dates (astronomers' calendar: Julian before 1582-10-15).</summary>
+/// <param name="Evening">Local date on which the night begins, YYYY-MM-DD.</param>
+/// <param name="Morning">Local date on which it ends, YYYY-MM-DD.</param>
+public sealed record NightResponse(string Evening, string Morning);
 
 /// <summary>One horizon-profile point.</summary>
 /// <param name="AzimuthDegrees">Azimuth, degrees from north through east.</param>
@@ -109,7 +117,7 @@ public sealed record VisibleMagnitudeResponse(double Value, string Utc, string L
 /// <param name="Closes">When they close, local time.</param>
 /// <param name="Phases">Visible stretches of each phase inside the opening hours.</param>
 /// <param name="Session">A suggested session, or null when nothing worth showing falls inside.</param>
-/// <param name="Note">One plain line about the plan.</param>
+/// <param name="Note">One plain line about the plan, saying which of two repeated local times is meant.</param>
 public sealed record PublicNightResponse(string Opens, string Closes, IReadOnlyList<VisiblePhaseResponse> Phases, SessionResponse? Session, string Note);
 
 /// <summary>A suggested public session.</summary>

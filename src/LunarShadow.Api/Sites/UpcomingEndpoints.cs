@@ -79,14 +79,15 @@ internal static class UpcomingEndpoints
         {
             var full = LocalMapping.ToResponse(u.Local, time, null);
             var greatest = time.ToUtc(u.Local.Eclipse.GreatestEclipse);
-            return new UpcomingItem(full.Eclipse.Date, full.Eclipse.Kind, TimeFormats.Utc(greatest), TimeFormats.Local(greatest, site.TimeZone).Text,
+            return new UpcomingItem(full.Eclipse.Date, full.Eclipse.Kind, full.Night, TimeFormats.Utc(greatest), TimeFormats.Local(greatest, site.TimeZone).Text,
                 TimeFormats.Round(u.QualifyingMinutes, 2), u.Qualifying.Select(q => LocalMapping.Phase(q, site.TimeZone)).ToList(),
                 full.MaxVisibleUmbralMagnitude, full.Summary);
         }).ToList();
         var note = items.Count < wanted
             ? $"Only {items.Count} such eclipses in the {UpcomingEclipses.MaxYearsAhead} years searched (or up to the year {SupportedRange.LastYear})."
             : null;
-        var response = new UpcomingResponse(LocalMapping.Echo(site),
+        var abbreviations = found.SelectMany(u => LocalDates.Abbreviations(u.Local.Outline.Night, site.TimeZone)).Distinct().ToList();
+        var response = new UpcomingResponse(LocalMapping.Echo(site, abbreviations),
             new UpcomingCriteriaEcho(start.Value.ToIsoDateString(), wanted, phaseName, criteria.AstronomicalNightOnly, site.MinimumAltitude.Degrees, open?.Trim(), model.Name),
             items.Count, items, note);
 
@@ -130,7 +131,7 @@ internal static class UpcomingEndpoints
             var date = TimeFormats.UtcDate(time.ToUtc(u.Local.Eclipse.GreatestEclipse));
             var kind = EclipseMapping.KindName(u.Local.Eclipse.Kind);
             calendar.Event(FormattableString.Invariant($"{date}-{site.Location.Latitude.Degrees:0.####}-{site.Location.Longitude.Degrees:0.####}@lunarshadow"),
-                time.ToUtc(u.Local.Eclipse.GreatestEclipse), start, end, $"Lunar eclipse ({kind}) visible", u.Local.Summary, where,
+                time.ToUtc(u.Local.Eclipse.GreatestEclipse), start, end, $"Lunar eclipse ({kind}) visible", SiteWording.Summary(u.Local), where,
                 (site.Location.Latitude.Degrees, site.Location.Longitude.Degrees), LocalFormats.AlarmMinutes);
         }
         return Results.Text(calendar.Finish(), ContentNegotiation.MediaType(OutputFormat.Calendar));
