@@ -70,7 +70,9 @@ internal static class EclipseEndpoints
             .Where(e => kinds.Contains(e.Kind))
             .Select(e => EclipseMapping.ToResponse(e, time))
             .ToList();
-        if (output == OutputFormat.Csv) return Results.Text(EclipseMapping.Csv(eclipses), ContentNegotiation.MediaType(OutputFormat.Csv));
+        if (output == OutputFormat.Csv)
+            return Results.Text(EclipseMapping.Csv(eclipses), ContentNegotiation.MediaType(OutputFormat.Csv))
+                .AsAttachment(Downloads.FileName(OutputFormat.Csv, "lunar-eclipses", from, "to", to));
         return TypedResults.Ok(new EclipseListResponse(model.Name, LayerKm(model), time.DeltaTModel.Name, from!.Trim(), to!.Trim(),
             eclipses.Count, eclipses, EmbeddedDataSet.VersionTag));
     }
@@ -89,6 +91,7 @@ internal static class EclipseEndpoints
         var response = EclipseMapping.ToResponse(eclipse, time);
         return output == OutputFormat.Csv
             ? Results.Text(EclipseMapping.Csv([response]), ContentNegotiation.MediaType(OutputFormat.Csv))
+                .AsAttachment(Downloads.FileName(OutputFormat.Csv, "lunar-eclipse", response.Date))
             : TypedResults.Ok(response);
     }
 

@@ -42,7 +42,10 @@ internal static class VisibilityMapEndpoints
             new GeoJsonMultiPolygon(r.Boxes.Select(b => new[] { new[] { new[] { b.West, b.South }, new[] { b.East, b.South }, new[] { b.East, b.North }, new[] { b.West, b.North }, new[] { b.West, b.South } } }).ToList()),
             new VisibilityProperties(r.Name, Describe(r.Name), r.Tt is { } tt ? TimeFormats.Utc(time.ToUtc(tt)) : null, VisibilityMap.ResolutionDegrees))).ToList();
         var collection = new VisibilityMapDocument(features, EclipseMapping.KindName(eclipse.Kind), TimeFormats.UtcDate(time.ToUtc(eclipse.GreatestEclipse)), model.Name);
-        return Results.Json(collection, contentType: ContentNegotiation.MediaType(output!.Value));
+        var json = Results.Json(collection, contentType: ContentNegotiation.MediaType(output!.Value));
+        return output == OutputFormat.GeoJson
+            ? json.AsAttachment(Downloads.FileName(OutputFormat.GeoJson, "lunar-eclipse", collection.Date, "visibility-map"))
+            : json;
     }
 
     private static string Describe(string name) => name switch

@@ -226,6 +226,19 @@ internal static class SiteWording
         return string.Join("\n", lines);
     }
 
+    /// <summary>The criteria of an upcoming search in words, e.g. "partial phase or more, Moon at least 5° up, within 19:00-23:30".</summary>
+    public static string Criteria(Sites.UpcomingCriteriaEcho c)
+    {
+        var parts = new List<string>
+        {
+            c.Phase == "penumbral" ? "any phase" : c.Phase == "partial" ? "partial phase or more" : "total phase",
+            string.Create(CultureInfo.InvariantCulture, $"Moon at least {c.MinAltitudeDegrees:0.#}° up"),
+        };
+        if (c.AstronomicalNightOnly) parts.Add("in astronomical night");
+        if (c.Open is not null) parts.Add($"within the opening hours {c.Open}");
+        return string.Join(", ", parts);
+    }
+
     /// <summary>Title of a photo-plan event.</summary>
     public static string PhotoEventTitle(string stage) => $"Photograph the lunar eclipse: {stage} phase";
 

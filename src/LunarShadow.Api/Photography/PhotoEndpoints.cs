@@ -5,6 +5,7 @@ using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Sites;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Photography;
+using NodaTime;
 
 namespace LunarShadow.Api.Photography;
 
@@ -42,13 +43,15 @@ internal static class PhotoEndpoints
         [Description("UTC date of greatest eclipse, YYYY-MM-DD (Julian calendar before 1582-10-15).")] string date,
         [AsParameters] PhotoParameters photo,
         [AsParameters] ModelParameters computation,
-        [Description("Response format: json (default), csv, ics or sequence; overrides the Accept header.")] string? format) =>
-        Plan(request, date, name => photo[name], computation, format, new QueryReader());
+        [Description("Response format: json (default), csv, ics or sequence; overrides the Accept header.")] string? format,
+        IClock clock) =>
+        Plan(request, date, name => photo[name], computation, format, new QueryReader(), clock);
 
     internal static async Task<IResult> Post(
         HttpRequest request,
         [Description("UTC date of greatest eclipse, YYYY-MM-DD (Julian calendar before 1582-10-15).")] string date,
-        [Description("Response format: json (default), csv, ics or sequence; overrides the Accept header.")] string? format)
+        [Description("Response format: json (default), csv, ics or sequence; overrides the Accept header.")] string? format,
+        IClock clock)
     {
         if (!(request.ContentType?.StartsWith("application/json", StringComparison.OrdinalIgnoreCase) ?? false))
             return Problems.UnsupportedMediaType("Send the site and camera as application/json.");
@@ -57,10 +60,10 @@ internal static class PhotoEndpoints
         if (fields is null) return reader.IsValid ? Problems.TooLarge($"The body may be at most {MaxBodyBytes / 1024} KiB.") : Problems.InvalidQuery(reader);
         var computation = new ModelParameters(fields.GetValueOrDefault("shadow"), fields.GetValueOrDefault("layerKm"),
             fields.GetValueOrDefault("deltaT"), fields.GetValueOrDefault("deltaTModel"));
-        return Plan(request, date, name => fields.GetValueOrDefault(name), computation, format, reader);
+        return Plan(request, date, name => fields.GetValueOrDefault(name), computation, format, reader, clock);
     }
 
-    private static IResult Plan(HttpRequest request, string date, Func<string, string?> field, ModelParameters computation, string? format, QueryReader reader)
+    private static IResult Plan(HttpRequest request, string date, Func<string, string?> field, ModelParameters computation, string? format, QueryReader reader, IClock clock)
     {
         var day = reader.Date("date", date);
         var (model, time) = computation.Read(reader);
@@ -70,11 +73,19 @@ internal static class PhotoEndpoints
 
         var plan = PhotoPlanner.Plan(eclipse, site!, camera!, settings!, time);
         var response = PhotoMapping.ToResponse(plan, time);
+        if (output == OutputFormat.Calendar)
+        {
+            if (PhotoFormats.ICalendar(plan, response, clock.GetCurrentInstant()) is { } calendar)
+                return Results.Text(calendar, ContentNegotiation.MediaType(OutputFormat.Calendar)).AsAttachment(PhotoFormats.FileName(response, OutputFormat.Calendar, "photo-plan"));
+            reader.Fail("format", "iCalendar covers Gregorian dates from 1583 to 9999 only; ask for json or csv.");
+            return Problems.InvalidQuery(reader);
+        }
         return output switch
         {
-            OutputFormat.Csv => Results.Text(PhotoMapping.Csv(response), ContentNegotiation.MediaType(OutputFormat.Csv)),
-            OutputFormat.Calendar => LocalFormats.Calendar(plan.Local, LocalMapping.ToResponse(plan.Local, time, null), reader),
-            OutputFormat.Sequence => Results.Json(PhotoMapping.Sequence(response), contentType: ContentNegotiation.MediaType(OutputFormat.Sequence)),
+            OutputFormat.Csv => Results.Text(PhotoMapping.Csv(response), ContentNegotiation.MediaType(OutputFormat.Csv))
+                .AsAttachment(PhotoFormats.FileName(response, OutputFormat.Csv, "photo-plan")),
+            OutputFormat.Sequence => Results.Json(PhotoMapping.Sequence(response), contentType: ContentNegotiation.MediaType(OutputFormat.Sequence))
+                .AsAttachment(PhotoFormats.FileName(response, OutputFormat.Sequence, "photo-sequence")),
             _ => TypedResults.Ok(response),
         };
     }

@@ -43,10 +43,11 @@ internal static class PhotoMapping
     public static string Csv(PhotoPlanResponse r)
     {
         var csv = new CsvWriter().Row("utc", "local", "contact", "phase", "umbral_fraction", "penumbral_fraction", "moon_altitude_deg", "moon_azimuth_deg",
-            "airmass", "brightness_stops", "shutter_s", "iso", "aperture", "bracket_stops", "warnings");
+            "airmass", "brightness_stops", "shutter_s", "iso", "aperture", "bracket_stops", "warnings", "local_date");
         foreach (var row in r.Timeline)
             csv.Row(row.Utc, row.Local, row.Contact, row.Phase, row.UmbralFraction, row.PenumbralFraction, row.MoonAltitudeDegrees, row.MoonAzimuthDegrees,
-                row.Airmass, row.BrightnessStops, row.Exposure.ShutterSeconds, row.Exposure.Iso, row.Exposure.Aperture, row.Exposure.BracketStops, string.Join("; ", row.Warnings));
+                row.Airmass, row.BrightnessStops, row.Exposure.ShutterSeconds, row.Exposure.Iso, row.Exposure.Aperture, row.Exposure.BracketStops, string.Join("; ", row.Warnings),
+                r.Night.Evening);
         return csv.ToString();
     }
 

@@ -113,19 +113,23 @@ public sealed record VisiblePhaseResponse(string Phase, string StartUtc, string 
 public sealed record VisibleMagnitudeResponse(double Value, string Utc, string Local, double AltitudeDegrees);
 
 /// <summary>The eclipse inside an observatory's opening hours.</summary>
-/// <param name="Opens">When the doors open that night, local time.</param>
-/// <param name="Closes">When they close, local time.</param>
+/// <param name="Opens">When the opening hours begin that night, local time.</param>
+/// <param name="Closes">When they end, local time.</param>
+/// <param name="OpensUtc">When they begin, UTC.</param>
+/// <param name="ClosesUtc">When they end, UTC.</param>
 /// <param name="Phases">Visible stretches of each phase inside the opening hours.</param>
 /// <param name="Session">A suggested session, or null when nothing worth showing falls inside.</param>
 /// <param name="Note">One plain line about the plan, saying which of two repeated local times is meant.</param>
-public sealed record PublicNightResponse(string Opens, string Closes, IReadOnlyList<VisiblePhaseResponse> Phases, SessionResponse? Session, string Note);
+public sealed record PublicNightResponse(string Opens, string Closes, string OpensUtc, string ClosesUtc, IReadOnlyList<VisiblePhaseResponse> Phases, SessionResponse? Session, string Note);
 
 /// <summary>A suggested public session.</summary>
 /// <param name="DoorsOpen">Local time.</param>
 /// <param name="DoorsClose">Local time.</param>
+/// <param name="DoorsOpenUtc">UTC.</param>
+/// <param name="DoorsCloseUtc">UTC.</param>
 /// <param name="MoonAltitudeAtOpenDegrees">Moon's altitude when the doors open, degrees.</param>
 /// <param name="MoonAltitudeAtCloseDegrees">Moon's altitude when they close, degrees.</param>
-public sealed record SessionResponse(string DoorsOpen, string DoorsClose, double MoonAltitudeAtOpenDegrees, double MoonAltitudeAtCloseDegrees);
+public sealed record SessionResponse(string DoorsOpen, string DoorsClose, string DoorsOpenUtc, string DoorsCloseUtc, double MoonAltitudeAtOpenDegrees, double MoonAltitudeAtCloseDegrees);
 
 /// <summary>Local circumstances for many sites.</summary>
 /// <param name="Count">Number of sites.</param>

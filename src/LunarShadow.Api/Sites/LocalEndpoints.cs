@@ -6,6 +6,7 @@ using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Sites;
 using LunarShadow.Astronomy.Time;
+using NodaTime;
 
 namespace LunarShadow.Api.Sites;
 
@@ -60,7 +61,8 @@ internal static class LocalEndpoints
         [Description(OpeningQuery.Description)] string? open,
         [Description("Add the Moon's and Sun's altitude through the night, sampled every this many minutes, 5 to 60, over 8 hours either side of greatest eclipse.")] string? track,
         [AsParameters] ModelParameters computation,
-        [Description("Response format: json (default), csv or ics; overrides the Accept header.")] string? format)
+        [Description("Response format: json (default), csv or ics; overrides the Accept header.")] string? format,
+        IClock clock)
     {
         var reader = new QueryReader();
         var day = reader.Date("date", date);
@@ -78,8 +80,9 @@ internal static class LocalEndpoints
         if (trackMinutes is { } step) response = response with { Track = LocalMapping.Track(local, step, time) };
         return output switch
         {
-            OutputFormat.Csv => Results.Text(LocalFormats.ContactsCsv(response), ContentNegotiation.MediaType(OutputFormat.Csv)),
-            OutputFormat.Calendar => LocalFormats.Calendar(local, response, reader),
+            OutputFormat.Csv => Results.Text(LocalFormats.Csv(response), ContentNegotiation.MediaType(OutputFormat.Csv))
+                .AsAttachment(LocalFormats.FileName(response, OutputFormat.Csv, "local")),
+            OutputFormat.Calendar => LocalFormats.Calendar(local, plan, response, clock.GetCurrentInstant(), reader),
             _ => TypedResults.Ok(response),
         };
     }
@@ -107,7 +110,8 @@ internal static class LocalEndpoints
             return LocalMapping.ToResponse(local, time, s.Hours is null ? null : PublicNightPlanner.Plan(local, s.Hours, time));
         }).ToList();
         return output == OutputFormat.Csv
-            ? Results.Text(LocalFormats.SitesCsv(rows), ContentNegotiation.MediaType(OutputFormat.Csv))
+            ? Results.Text(LocalFormats.BatchCsv(rows), ContentNegotiation.MediaType(OutputFormat.Csv))
+                .AsAttachment(Downloads.FileName(OutputFormat.Csv, "lunar-eclipse", rows.Count > 0 ? rows[0].Eclipse.Date : date, "sites"))
             : TypedResults.Ok(new LocalBatchResponse(rows.Count, rows));
     }
 

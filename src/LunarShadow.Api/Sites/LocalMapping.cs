@@ -44,8 +44,9 @@ internal static class LocalMapping
                 : null,
             SiteWording.Summary(l),
             plan is null ? null : new PublicNightResponse(Local(plan.Window.Opens), Local(plan.Window.Closes),
+                TimeFormats.Utc(plan.Window.Opens), TimeFormats.Utc(plan.Window.Closes),
                 plan.PhasesInWindow.Select(p => Phase(p, zone)).ToList(),
-                plan.Session is { } s ? new SessionResponse(Local(s.DoorsOpen), Local(s.DoorsClose),
+                plan.Session is { } s ? new SessionResponse(Local(s.DoorsOpen), Local(s.DoorsClose), TimeFormats.Utc(s.DoorsOpen), TimeFormats.Utc(s.DoorsClose),
                     TimeFormats.Round(s.MoonAltitudeAtOpen.Degrees, 1), TimeFormats.Round(s.MoonAltitudeAtClose.Degrees, 1)) : null,
                 SiteWording.PublicNightNote(plan, l)),
             SiteWording.Cautions(l));

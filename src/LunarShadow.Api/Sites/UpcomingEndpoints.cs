@@ -91,49 +91,21 @@ internal static class UpcomingEndpoints
             new UpcomingCriteriaEcho(start.Value.ToIsoDateString(), wanted, phaseName, criteria.AstronomicalNightOnly, site.MinimumAltitude.Degrees, open?.Trim(), model.Name),
             items.Count, items, note);
 
-        return output switch
+        if (output == OutputFormat.Calendar)
         {
-            OutputFormat.Csv => Results.Text(Csv(items), ContentNegotiation.MediaType(OutputFormat.Csv)),
-            OutputFormat.Calendar => Calendar(found, site, time, reader),
-            _ => TypedResults.Ok(response),
-        };
+            if (UpcomingFormats.ICalendar(found, items, site, SiteWording.Criteria(response.Criteria), clock.GetCurrentInstant()) is { } text)
+                return Results.Text(text, ContentNegotiation.MediaType(OutputFormat.Calendar)).AsAttachment(UpcomingFormats.FileName(response.Site, OutputFormat.Calendar));
+            reader.Fail("format", "iCalendar covers Gregorian dates from 1583 to 9999 only; ask for json or csv.");
+            return Problems.InvalidQuery(reader);
+        }
+        return output == OutputFormat.Csv
+            ? Results.Text(UpcomingFormats.Csv(items), ContentNegotiation.MediaType(OutputFormat.Csv)).AsAttachment(UpcomingFormats.FileName(response.Site, OutputFormat.Csv))
+            : TypedResults.Ok(response);
     }
 
     private static CalendarDate? Today(IClock clock)
     {
         var today = clock.GetCurrentInstant().InUtc().Date;
         return new CalendarDate(today.Year, today.Month, today.Day, true);
-    }
-
-    private static string Csv(IEnumerable<UpcomingItem> items)
-    {
-        var csv = new CsvWriter().Row("date", "kind", "greatest_utc", "greatest_local", "qualifying_minutes", "first_qualifying_utc", "last_qualifying_utc", "max_visible_umbral_magnitude", "summary");
-        foreach (var i in items)
-            csv.Row(i.Date, i.Kind, i.GreatestEclipseUtc, i.GreatestEclipseLocal, i.QualifyingMinutes, i.Qualifying.Count > 0 ? i.Qualifying[0].StartUtc : null,
-                i.Qualifying.Count > 0 ? i.Qualifying[^1].EndUtc : null, i.MaxVisibleUmbralMagnitude?.Value, i.Summary);
-        return csv.ToString();
-    }
-
-    // A subscription feed: one event per eclipse, spanning its qualifying stretches, with an alarm.
-    private static IResult Calendar(List<UpcomingEclipse> found, Site site, TimeScaleConverter time, QueryReader reader)
-    {
-        if (found.Any(u => u.Qualifying.Any(q => !ICalendarWriter.CanWrite(q.StartUtc))))
-        {
-            reader.Fail("format", "iCalendar covers Gregorian dates from 1583 to 9999 only; ask for json or csv.");
-            return Problems.InvalidQuery(reader);
-        }
-        var where = site.Name ?? FormattableString.Invariant($"{site.Location.Latitude.Degrees:0.####}, {site.Location.Longitude.Degrees:0.####}");
-        var calendar = new ICalendarWriter($"Lunar eclipses visible from {where}");
-        foreach (var u in found)
-        {
-            var start = u.Qualifying.Min(q => q.StartUtc);
-            var end = u.Qualifying.Max(q => q.EndUtc);
-            var date = TimeFormats.UtcDate(time.ToUtc(u.Local.Eclipse.GreatestEclipse));
-            var kind = EclipseMapping.KindName(u.Local.Eclipse.Kind);
-            calendar.Event(FormattableString.Invariant($"{date}-{site.Location.Latitude.Degrees:0.####}-{site.Location.Longitude.Degrees:0.####}@lunarshadow"),
-                time.ToUtc(u.Local.Eclipse.GreatestEclipse), start, end, $"Lunar eclipse ({kind}) visible", SiteWording.Summary(u.Local), where,
-                (site.Location.Latitude.Degrees, site.Location.Longitude.Degrees), LocalFormats.AlarmMinutes);
-        }
-        return Results.Text(calendar.Finish(), ContentNegotiation.MediaType(OutputFormat.Calendar));
     }
 }
