@@ -204,7 +204,7 @@ internal static class SiteWording
         foreach (var p in plan.PhasesInWindow.Where(p => p.Phase == EclipsePhase.Total))
             lines.Add(string.Create(CultureInfo.InvariantCulture, $"Totality inside opening hours: {Clock(p.StartUtc, zone)} to {Clock(p.EndUtc, zone)} ({p.Minutes:0} minutes)."));
         lines.Add(string.Create(CultureInfo.InvariantCulture,
-            $"The Moon stands {s.MoonAltitudeAtOpen.Degrees:0}° above the horizon when the doors open and {s.MoonAltitudeAtClose.Degrees:0}° when they close."));
+            $"The Moon stands {TimeFormats.Round(s.MoonAltitudeAtOpen.Degrees, 1):0.#}° above the horizon when the doors open and {TimeFormats.Round(s.MoonAltitudeAtClose.Degrees, 1):0.#}° when they close."));
         lines.AddRange(Cautions(local));
         return string.Join("\n", lines);
     }

@@ -1,0 +1,14 @@
+using Microsoft.AspNetCore.Hosting;
+using Microsoft.AspNetCore.Mvc.Testing;
+
+namespace LunarShadow.Api.Tests.Support;
+
+/// <summary>An in-memory host whose rate limit is raised, for tests that walk many eclipses and sites.</summary>
+public sealed class UnthrottledApiFactory : WebApplicationFactory<Program>
+{
+    protected override void ConfigureWebHost(IWebHostBuilder builder)
+    {
+        builder.UseSetting("RateLimiting:PermitsPerSecond", "1000000");
+        builder.UseSetting("RateLimiting:Burst", "1000000");
+    }
+}
