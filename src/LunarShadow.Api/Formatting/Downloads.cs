@@ -36,20 +36,35 @@ internal static class Downloads
             $"{Math.Abs(latitudeDegrees):0.##}{(latitudeDegrees < 0 ? 's' : 'n')}-{Math.Abs(longitudeDegrees):0.##}{(longitudeDegrees < 0 ? 'w' : 'e')}");
     }
 
-    // Letters lose their accents (Unicode decomposition), everything else but ASCII letters, digits and dots becomes one
+    // Letters lose their accents (by a table, as the service runs with invariant globalization), everything else but ASCII letters, digits and dots becomes one
     // hyphen; at most 48 characters, so the name is safe in a header, a URL and every file system.
     private static string Slug(string? text)
     {
         if (string.IsNullOrWhiteSpace(text)) return "";
         var builder = new StringBuilder();
-        foreach (var c in text.Normalize(NormalizationForm.FormD))
+        foreach (var c in text)
         {
-            if (char.IsAsciiLetterOrDigit(c) || c == '.') builder.Append(char.ToLowerInvariant(c));
-            else if (CharUnicodeInfo.GetUnicodeCategory(c) == UnicodeCategory.NonSpacingMark) continue;
+            var folded = Fold(char.ToLowerInvariant(c));
+            if (folded is not null) builder.Append(folded);
             else if (builder.Length > 0 && builder[^1] != '-') builder.Append('-');
         }
         var slug = builder.ToString().Trim('-', '.');
         return slug.Length > 48 ? slug[..48].TrimEnd('-', '.') : slug;
+    }
+
+    private const string Accented = "àáâãäåāăąçćčďđèéêëēėęěìíîïīįıñńňòóôõöøōőùúûüūůűųýÿźżžßæœþð";
+    private static readonly string[] Plain =
+    [
+        "a", "a", "a", "a", "a", "a", "a", "a", "a", "c", "c", "c", "d", "d", "e", "e", "e", "e", "e", "e", "e", "e",
+        "i", "i", "i", "i", "i", "i", "i", "n", "n", "n", "o", "o", "o", "o", "o", "o", "o", "o", "u", "u", "u", "u", "u", "u",
+        "u", "u", "y", "y", "z", "z", "z", "ss", "ae", "oe", "th", "d",
+    ];
+
+    private static string? Fold(char c)
+    {
+        if (char.IsAsciiLetterOrDigit(c) || c == '.') return c.ToString();
+        var i = Accented.IndexOf(c, StringComparison.Ordinal);
+        return i >= 0 ? Plain[i] : null;
     }
 
     private sealed class Attachment(IResult inner, string fileName) : IResult

@@ -12,3 +12,10 @@ public sealed class UnthrottledApiFactory : WebApplicationFactory<Program>
         builder.UseSetting("RateLimiting:Burst", "1000000");
     }
 }
+
+/// <summary>The export tests share one unthrottled host (one start-up, one logger).</summary>
+[CollectionDefinition(Name)]
+public sealed class ExportHost : ICollectionFixture<UnthrottledApiFactory>
+{
+    public const string Name = "exports";
+}
