@@ -92,8 +92,8 @@ public class PageTests(BrowserFixture fixture) : IClassFixture<BrowserFixture>
         await page.WaitForFunctionAsync("document.querySelectorAll('#exports a').length === 4");
         var csv = await page.RunAndWaitForDownloadAsync(() => page.ClickAsync("text=Contacts as CSV"));
         var csvText = await File.ReadAllTextAsync((await csv.PathAsync())!);
-        Assert.StartsWith("contact,utc,local,moon_altitude_deg", csvText, StringComparison.Ordinal);
-        Assert.Equal(8, csvText.Split("\r\n", StringSplitOptions.RemoveEmptyEntries).Length);
+        Assert.StartsWith("kind,name,local_date,utc,local,", csvText, StringComparison.Ordinal);
+        Assert.Equal(7, csvText.Split("\r\n", StringSplitOptions.RemoveEmptyEntries).Count(l => l.StartsWith("contact,", StringComparison.Ordinal)));
         var ics = await page.RunAndWaitForDownloadAsync(() => page.ClickAsync("text=Add to calendar (iCalendar)"));
         var icsText = await File.ReadAllTextAsync((await ics.PathAsync())!);
         Assert.StartsWith("BEGIN:VCALENDAR\r\n", icsText, StringComparison.Ordinal);

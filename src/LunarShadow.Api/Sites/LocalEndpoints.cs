@@ -28,7 +28,7 @@ internal static class LocalEndpoints
         group.MapGet("/", Get)
             .WithName("GetLocalCircumstances")
             .WithSummary("What one site sees of an eclipse")
-            .WithDescription("Contacts in UTC and local time with the Moon's altitude and azimuth, visibility, the Sun's altitude and sky state; moonrise, moonset and horizon-profile events; the visible part of each phase; the largest visible umbral magnitude; a plain summary; and with open=, a public-night plan. JSON, CSV (contact table) or iCalendar (one event per visible phase) by Accept or format=.")
+            .WithDescription("Contacts in UTC and local time with the Moon's altitude and azimuth, visibility, the Sun's altitude and sky state; moonrise, moonset and horizon-profile events; the visible part of each phase; the largest visible umbral magnitude; a plain summary; and with open=, a public-night plan. JSON, CSV (contacts, moon events, visible phases and the public-night plan as rows of their own kind) or iCalendar (one event per visible phase, and the public session with open=) by Accept or format=.")
             .Produces<LocalResponse>(StatusCodes.Status200OK, "application/json", "text/csv", "text/calendar")
             .ProducesValidationProblem()
             .ProducesProblem(StatusCodes.Status404NotFound)
