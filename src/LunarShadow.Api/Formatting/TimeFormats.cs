@@ -41,7 +41,7 @@ internal static partial class TimeFormats
         Instant.FromUnixTimeTicks((long)Math.Round(instant.ToUnixTimeTicks() / 10_000.0, MidpointRounding.AwayFromZero) * 10_000);
 
     /// <summary>The calendar date (astronomers' calendar) of a UTC instant, YYYY-MM-DD.</summary>
-    public static string UtcDate(Instant instant) => Write(instant.ToJulianDate(), "")[..DateLength(instant.ToJulianDate())];
+    public static string UtcDate(Instant instant) => Write(ToMillisecond(instant).ToJulianDate(), "")[..DateLength(ToMillisecond(instant).ToJulianDate())];
 
     /// <summary>A number rounded for display.</summary>
     public static double Round(double value, int digits) => Math.Round(value, digits, MidpointRounding.AwayFromZero);

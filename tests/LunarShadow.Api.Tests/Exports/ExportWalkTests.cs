@@ -219,6 +219,17 @@ public class ExportWalkTests(UnthrottledApiFactory factory)
                 var first = DateTimeOffset.Parse(rows[0].GetProperty("utc").GetString()!, CultureInfo.InvariantCulture).UtcDateTime;
                 var last = DateTimeOffset.Parse(rows[^1].GetProperty("utc").GetString()!, CultureInfo.InvariantCulture).UtcDateTime;
                 Assert.True(e.DtStart!.AsUtc >= first.AddSeconds(-1) && e.DtStart.AsUtc <= last.AddSeconds(1));
+                // The shutter range described is that of the JSON rows inside the event's window.
+                var inside = rows.Where(r =>
+                {
+                    var t = DateTimeOffset.Parse(r.GetProperty("utc").GetString()!, CultureInfo.InvariantCulture).UtcDateTime;
+                    return t >= e.DtStart.AsUtc.AddSeconds(-1) && t <= e.DtEnd!.AsUtc.AddSeconds(1)
+                        && e.Summary!.EndsWith($": {r.GetProperty("phase").GetString()} phase", StringComparison.Ordinal);
+                }).ToList();
+                Assert.NotEmpty(inside);
+                var debug = e.Description + " :: " + string.Join(",", inside.Select(r => r.GetProperty("utc").GetString() + "=" + r.GetProperty("exposure").GetProperty("shutterSeconds").GetDouble()));
+                Assert.True(e.Description!.Contains(LunarShadow.Api.Formatting.SiteWording.Shutter(inside.Min(r => r.GetProperty("exposure").GetProperty("shutterSeconds").GetDouble())), StringComparison.Ordinal), debug);
+                Assert.True(e.Description.Contains(LunarShadow.Api.Formatting.SiteWording.Shutter(inside.Max(r => r.GetProperty("exposure").GetProperty("shutterSeconds").GetDouble())), StringComparison.Ordinal), debug);
             }
         }
         Assert.True(events > 10, $"only {events} photo events in the walk ({failures.Count} plans failed: {string.Join("; ", failures)})");
