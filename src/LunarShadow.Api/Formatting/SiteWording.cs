@@ -227,15 +227,15 @@ internal static class SiteWording
     }
 
     /// <summary>The criteria of an upcoming search in words, e.g. "partial phase or more, Moon at least 5° up, within 19:00-23:30".</summary>
-    public static string Criteria(Sites.UpcomingCriteriaEcho c)
+    public static string Criteria(string phase, double minAltitudeDegrees, bool astronomicalNightOnly, string? open)
     {
         var parts = new List<string>
         {
-            c.Phase == "penumbral" ? "any phase" : c.Phase == "partial" ? "partial phase or more" : "total phase",
-            string.Create(CultureInfo.InvariantCulture, $"Moon at least {c.MinAltitudeDegrees:0.#}° up"),
+            phase == "penumbral" ? "any phase" : phase == "partial" ? "partial phase or more" : "total phase",
+            string.Create(CultureInfo.InvariantCulture, $"Moon at least {minAltitudeDegrees:0.#}° up"),
         };
-        if (c.AstronomicalNightOnly) parts.Add("in astronomical night");
-        if (c.Open is not null) parts.Add($"within the opening hours {c.Open}");
+        if (astronomicalNightOnly) parts.Add("in astronomical night");
+        if (open is not null) parts.Add($"within the opening hours {open}");
         return string.Join(", ", parts);
     }
 

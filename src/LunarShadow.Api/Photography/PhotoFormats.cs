@@ -1,5 +1,5 @@
 using LunarShadow.Api.Formatting;
-using LunarShadow.Api.Sites;
+using LunarShadow.Api.Common;
 using LunarShadow.Astronomy.Photography;
 using NodaTime;
 
@@ -30,7 +30,7 @@ internal static class PhotoFormats
             var start = stretch[0].Row.Utc;
             var end = j + 1 < rows.Count ? rows[j + 1].Row.Utc : stretch[^1].Row.Utc;
             if (end <= start) end = start + step;
-            var stage = PhotoMapping.PhaseName(stretch[0].Row.Phase);
+            var stage = WireNames.Of(stretch[0].Row.Phase);
             var n = counts[stretch[0].Row.Phase] = counts.GetValueOrDefault(stretch[0].Row.Phase) + 1;
             var exposures = stretch.Select(r => r.Shown.Exposure).ToList();
             var description = SiteWording.PhotoEventDescription(zone, stage, start, end,

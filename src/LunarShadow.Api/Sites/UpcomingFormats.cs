@@ -1,3 +1,4 @@
+using LunarShadow.Api.Common;
 using LunarShadow.Api.Formatting;
 using LunarShadow.Astronomy.Sites;
 using NodaTime;

@@ -3,7 +3,7 @@ using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Sites;
 using NodaTime;
 
-namespace LunarShadow.Api.Sites;
+namespace LunarShadow.Api.Common;
 
 /// <summary>
 /// CSV and iCalendar representations of local circumstances. Entry points: <see cref="Csv"/> (one site),
@@ -83,7 +83,7 @@ internal static class LocalFormats
                 r.Eclipse.Date, r.Night.Evening, r.Night.Morning, whole.Count > 0,
                 whole.FirstOrDefault()?.StartUtc, whole.FirstOrDefault()?.StartLocal, whole.LastOrDefault()?.EndUtc, whole.LastOrDefault()?.EndLocal,
                 Minutes("penumbral"), Minutes("partial"), Minutes("total"),
-                r.MaxVisibleUmbralMagnitude?.Value, r.MaxVisibleUmbralMagnitude?.Utc, r.MaxVisibleUmbralMagnitude?.Local, r.MaxVisibleUmbralMagnitude?.AltitudeDegrees,
+                r.GreatestVisibleUmbralMagnitude?.Value, r.GreatestVisibleUmbralMagnitude?.Utc, r.GreatestVisibleUmbralMagnitude?.Local, r.GreatestVisibleUmbralMagnitude?.AltitudeDegrees,
                 r.MoonHorizon, session?.DoorsOpenUtc, session?.DoorsOpen, session?.DoorsCloseUtc, session?.DoorsClose, r.Summary, r.PublicNight?.Note);
         }
         return csv.ToString();
