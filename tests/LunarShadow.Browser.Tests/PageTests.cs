@@ -262,9 +262,12 @@ public class PageTests(BrowserFixture fixture)
         await s.Page.WaitForFunctionAsync("document.querySelectorAll('#exports a').length === 5");
         var csv = await s.Page.RunAndWaitForDownloadAsync(() => s.Page.ClickAsync("text=Contacts as CSV"));
         var csvText = await File.ReadAllTextAsync((await csv.PathAsync())!);
-        Assert.StartsWith("contact,utc,local,moon_altitude_deg", csvText, StringComparison.Ordinal);
-        var ics = await s.Page.RunAndWaitForDownloadAsync(() => s.Page.ClickAsync("text=Add to calendar (iCalendar)"));
-        Assert.StartsWith("BEGIN:VCALENDAR\r\n", await File.ReadAllTextAsync((await ics.PathAsync())!), StringComparison.Ordinal);
+        Assert.StartsWith("kind,name,local_date,utc,local,", csvText, StringComparison.Ordinal);
+        Assert.Equal(7, csvText.Split("\r\n", StringSplitOptions.RemoveEmptyEntries).Count(l => l.StartsWith("contact,", StringComparison.Ordinal)));
+        var ics = await s.Page.RunAndWaitForDownloadAsync(() => page.ClickAsync("text=Add to calendar (iCalendar)"));
+        var icsText = await File.ReadAllTextAsync((await ics.PathAsync())!);
+        Assert.StartsWith("BEGIN:VCALENDAR\r\n", icsText, StringComparison.Ordinal);
+        Assert.Contains("BEGIN:VEVENT", icsText, StringComparison.Ordinal);
         Assert.Contains("/embed.html?", await s.Page.InputValueAsync("#embed-code"), StringComparison.Ordinal);
     }
 

@@ -3,6 +3,7 @@ namespace LunarShadow.Api.Common;
 /// <summary>What one site sees of one eclipse.</summary>
 /// <param name="Site">The site as understood (echo).</param>
 /// <param name="Eclipse">The eclipse.</param>
+/// <param name="Night">The local dates of the night that holds the visible part (or greatest eclipse when nothing is seen).</param>
 /// <param name="DeltaTSeconds">ΔT used, seconds.</param>
 /// <param name="DeltaTUncertaintySeconds">Its one-sigma uncertainty, seconds.</param>
 /// <param name="Contacts">P1, U1, U2, greatest, U3, U4, P4 as they occur, seen from the site.</param>
@@ -11,13 +12,14 @@ namespace LunarShadow.Api.Common;
 /// <param name="VisiblePhases">Visible stretches of each phase: penumbral (P1–P4), partial (U1–U4), total (U2–U3).</param>
 /// <param name="VisibleTotalityMinutes">Minutes of totality visible from the site.</param>
 /// <param name="GreatestVisibleUmbralMagnitude">Greatest umbral magnitude seen, or null when nothing is seen.</param>
-/// <param name="Summary">One plain line on what the site sees.</param>
+/// <param name="Summary">One plain line on what the site sees, naming the night, the zone and what is missed.</param>
 /// <param name="PublicNight">The plan within the opening hours, when <c>open</c> was given.</param>
 /// <param name="Cautions">Safety notes that apply to this night.</param>
 /// <param name="Track">The Moon's and Sun's altitude through the night, when <c>track</c> was asked for.</param>
 public sealed record LocalResponse(
     SiteEcho Site,
     EclipseBrief Eclipse,
+    NightResponse Night,
     double DeltaTSeconds,
     double DeltaTUncertaintySeconds,
     IReadOnlyList<LocalContactResponse> Contacts,
@@ -50,12 +52,18 @@ public sealed record TrackPointResponse(string Utc, string Local, double MoonAlt
 /// <param name="LongitudeDegrees">Longitude, degrees.</param>
 /// <param name="ElevationMeters">Height, metres.</param>
 /// <param name="TimeZone">IANA time zone used.</param>
+/// <param name="TimeZoneAbbreviations">The zone's abbreviations in force on the night(s) concerned, from the tzdb (e.g. CEST and CET on a night the clocks go back; UTC+14:00 where the tzdb has no letters).</param>
 /// <param name="MinAltitudeDegrees">Minimum useful altitude of the Moon's upper limb, degrees.</param>
 /// <param name="Horizon">Horizon-profile points, if any.</param>
 /// <param name="Hint">A hint about defaults that were applied, if any.</param>
 public sealed record SiteEcho(
     string? Name, double LatitudeDegrees, double LongitudeDegrees, double ElevationMeters, string TimeZone,
-    double MinAltitudeDegrees, IReadOnlyList<HorizonPointResponse> Horizon, string? Hint);
+    IReadOnlyList<string> TimeZoneAbbreviations, double MinAltitudeDegrees, IReadOnlyList<HorizonPointResponse> Horizon, string? Hint);
+
+/// <summary>A night named by its local calendar dates (astronomers' calendar: Julian before 1582-10-15).</summary>
+/// <param name="Evening">Local date on which the night begins, YYYY-MM-DD.</param>
+/// <param name="Morning">Local date on which it ends, YYYY-MM-DD.</param>
+public sealed record NightResponse(string Evening, string Morning);
 
 /// <summary>One horizon-profile point.</summary>
 /// <param name="AzimuthDegrees">Azimuth, degrees from north through east.</param>
@@ -109,19 +117,23 @@ public sealed record VisiblePhaseResponse(string Phase, string StartUtc, string 
 public sealed record VisibleMagnitudeResponse(double Value, string Utc, string Local, double AltitudeDegrees);
 
 /// <summary>The eclipse inside an observatory's opening hours.</summary>
-/// <param name="Opens">When the doors open that night, local time.</param>
-/// <param name="Closes">When they close, local time.</param>
+/// <param name="Opens">When the opening hours begin that night, local time.</param>
+/// <param name="Closes">When they end, local time.</param>
+/// <param name="OpensUtc">When they begin, UTC.</param>
+/// <param name="ClosesUtc">When they end, UTC.</param>
 /// <param name="Phases">Visible stretches of each phase inside the opening hours.</param>
 /// <param name="Session">A suggested session, or null when nothing worth showing falls inside.</param>
-/// <param name="Note">One plain line about the plan.</param>
-public sealed record PublicNightResponse(string Opens, string Closes, IReadOnlyList<VisiblePhaseResponse> Phases, SessionResponse? Session, string Note);
+/// <param name="Note">One plain line about the plan, saying which of two repeated local times is meant.</param>
+public sealed record PublicNightResponse(string Opens, string Closes, string OpensUtc, string ClosesUtc, IReadOnlyList<VisiblePhaseResponse> Phases, SessionResponse? Session, string Note);
 
 /// <summary>A suggested public session.</summary>
 /// <param name="DoorsOpen">Local time.</param>
 /// <param name="DoorsClose">Local time.</param>
+/// <param name="DoorsOpenUtc">UTC.</param>
+/// <param name="DoorsCloseUtc">UTC.</param>
 /// <param name="MoonAltitudeAtOpenDegrees">Moon's altitude when the doors open, degrees.</param>
 /// <param name="MoonAltitudeAtCloseDegrees">Moon's altitude when they close, degrees.</param>
-public sealed record SessionResponse(string DoorsOpen, string DoorsClose, double MoonAltitudeAtOpenDegrees, double MoonAltitudeAtCloseDegrees);
+public sealed record SessionResponse(string DoorsOpen, string DoorsClose, string DoorsOpenUtc, string DoorsCloseUtc, double MoonAltitudeAtOpenDegrees, double MoonAltitudeAtCloseDegrees);
 
 /// <summary>Local circumstances for many sites.</summary>
 /// <param name="Count">Number of sites.</param>

@@ -13,10 +13,12 @@ internal static class LocalMapping
         var zone = l.Site.TimeZone;
         string Local(Instant i) => TimeFormats.Local(i, zone).Text;
         var deltaT = time.DeltaTAt(l.Eclipse.GreatestEclipse);
+        var night = l.Outline.Night;
         return new LocalResponse(
-            Echo(l.Site),
+            Echo(l.Site, LocalDates.Abbreviations(night, zone)),
             new EclipseBrief(TimeFormats.UtcDate(time.ToUtc(l.Eclipse.GreatestEclipse)), WireNames.Of(l.Eclipse.Kind),
                 TimeFormats.Utc(time.ToUtc(l.Eclipse.GreatestEclipse)), TimeFormats.Round(l.Eclipse.UmbralMagnitude, 5), l.Eclipse.Model.Name),
+            Night(night),
             TimeFormats.Round(deltaT.Seconds, 1),
             TimeFormats.Round(deltaT.UncertaintySeconds, 1),
             l.Contacts.Select(c =>
@@ -34,13 +36,14 @@ internal static class LocalMapping
             l.MaxVisibleUmbralMagnitude is { } m
                 ? new VisibleMagnitudeResponse(TimeFormats.Round(m.Value, 4), TimeFormats.Utc(m.Utc), Local(m.Utc), TimeFormats.Round(m.Altitude.Degrees, 2))
                 : null,
-            l.Summary,
+            SiteWording.Summary(l),
             plan is null ? null : new PublicNightResponse(Local(plan.Window.Opens), Local(plan.Window.Closes),
+                TimeFormats.Utc(plan.Window.Opens), TimeFormats.Utc(plan.Window.Closes),
                 plan.PhasesInWindow.Select(p => Phase(p, zone)).ToList(),
-                plan.Session is { } s ? new SessionResponse(Local(s.DoorsOpen), Local(s.DoorsClose),
+                plan.Session is { } s ? new SessionResponse(Local(s.DoorsOpen), Local(s.DoorsClose), TimeFormats.Utc(s.DoorsOpen), TimeFormats.Utc(s.DoorsClose),
                     TimeFormats.Round(s.MoonAltitudeAtOpen.Degrees, 1), TimeFormats.Round(s.MoonAltitudeAtClose.Degrees, 1)) : null,
-                plan.Note),
-            Cautions(l));
+                SiteWording.PublicNightNote(plan, l)),
+            SiteWording.Cautions(l));
     }
 
     /// <summary>The Moon's and Sun's altitude every few minutes over 8 hours either side of greatest eclipse.</summary>
@@ -61,29 +64,23 @@ internal static class LocalMapping
         return points;
     }
 
-    public static SiteEcho Echo(Site site) => new(
+    /// <summary>The site as understood, with the zone abbreviations in force on the nights concerned.</summary>
+    public static SiteEcho Echo(Site site, IReadOnlyList<string> abbreviations) => new(
         site.Name,
         site.Location.Latitude.Degrees,
         site.Location.Longitude.Degrees,
         site.Location.ElevationMeters,
         site.TimeZone.Id,
+        abbreviations,
         site.MinimumAltitude.Degrees,
         site.Horizon.Points.Select(p => new HorizonPointResponse(p.Azimuth, p.Altitude)).ToList(),
-        site.TimeZone == DateTimeZone.Utc ? "No time zone given: local times are in UTC. Pass tz=Area/City (IANA), e.g. tz=Europe/Vienna." : null);
+        site.TimeZone == DateTimeZone.Utc ? SiteWording.UtcHint : null);
+
+    /// <summary>A night by its local dates.</summary>
+    public static NightResponse Night(LocalNight night) => new(LocalDates.Iso(night.Evening), LocalDates.Iso(night.Morning));
 
     public static VisiblePhaseResponse Phase(VisibleSpan p, DateTimeZone zone) => new(
         WireNames.Of(p.Phase), TimeFormats.Utc(p.StartUtc), TimeFormats.Utc(p.EndUtc),
         TimeFormats.Local(p.StartUtc, zone).Text, TimeFormats.Local(p.EndUtc, zone).Text, TimeFormats.Round(p.Minutes, 2));
 
-    // Common practice for eclipse outreach: warn about the Sun whenever it is up or just set (or about to rise) while
-    // the eclipsed Moon is low on the opposite horizon, and about the dark for every visible night-time eclipse.
-    private static List<string> Cautions(LocalCircumstances l)
-    {
-        var cautions = new List<string>();
-        if (l.Contacts.Any(c => c.Visible && c.SunAltitude.Degrees > -6))
-            cautions.Add("The Sun is up or only just below the horizon, opposite the Moon, during part of the visible eclipse: never point binoculars, telescopes or camera lenses near it, and keep optics capped while turning.");
-        if (l.AnyVisible)
-            cautions.Add("Observing at night: choose a site you can reach and leave safely in the dark, watch for traffic and uneven ground, dress for the cold, and follow local rules for access and lights.");
-        return cautions;
-    }
 }

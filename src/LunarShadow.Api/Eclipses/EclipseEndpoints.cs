@@ -75,7 +75,9 @@ internal static class EclipseEndpoints
             .Where(e => kinds.Contains(WireNames.Of(e.Kind)))
             .Select(e => EclipseMapping.ToResponse(e, time))
             .ToList();
-        if (output == OutputFormat.Csv) return Results.Text(EclipseMapping.Csv(eclipses), ContentNegotiation.MediaType(OutputFormat.Csv));
+        if (output == OutputFormat.Csv)
+            return Results.Text(EclipseMapping.Csv(eclipses), ContentNegotiation.MediaType(OutputFormat.Csv))
+                .AsAttachment(Downloads.FileName(OutputFormat.Csv, "lunar-eclipses", f.Raw(From), "to", f.Raw(To)));
         return TypedResults.Ok(new EclipseListResponse(model.Name, LayerKm(model), time.DeltaTModel.Name, f.Raw(From)!.Trim(), f.Raw(To)!.Trim(),
             eclipses.Count, eclipses, EmbeddedDataSet.VersionTag));
     }
@@ -88,6 +90,7 @@ internal static class EclipseEndpoints
         var response = EclipseMapping.ToResponse(eclipse, r.Time);
         return r.Output == OutputFormat.Csv
             ? Results.Text(EclipseMapping.Csv([response]), ContentNegotiation.MediaType(OutputFormat.Csv))
+                .AsAttachment(Downloads.FileName(OutputFormat.Csv, "lunar-eclipse", response.Date))
             : TypedResults.Ok(response);
     }
 

@@ -36,7 +36,10 @@ internal static class VisibilityMapEndpoints
             new GeoJsonMultiPolygon(VisibilityOutlines.Outline(r.Boxes, VisibilityMap.ResolutionDegrees)),
             new VisibilityProperties(r.Name, Describe(r.Name), r.Tt is { } tt ? TimeFormats.Utc(time.ToUtc(tt)) : null, VisibilityMap.ResolutionDegrees))).ToList();
         var collection = new VisibilityMapDocument(features, WireNames.Of(eclipse.Kind), TimeFormats.UtcDate(time.ToUtc(eclipse.GreatestEclipse)), model.Name);
-        return Results.Json(collection, contentType: ContentNegotiation.MediaType(query.Output!.Value));
+        var json = Results.Json(collection, contentType: ContentNegotiation.MediaType(query.Output!.Value));
+        return query.Output == OutputFormat.GeoJson
+            ? json.AsAttachment(Downloads.FileName(OutputFormat.GeoJson, "lunar-eclipse", collection.Date, "visibility-map"))
+            : json;
     }
 
     private static string Describe(string name) => name switch

@@ -1,34 +1,70 @@
 using System.Globalization;
-using System.Text;
+using System.Text.RegularExpressions;
+using CsvHelper;
 
 namespace LunarShadow.Api.Formatting;
 
-/// <summary>RFC 4180 CSV: comma-separated, CRLF line ends, fields quoted where they need it, invariant numbers.</summary>
-internal sealed class CsvWriter
+/// <summary>
+/// RFC 4180 CSV written with CsvHelper: comma-separated, CRLF line ends, fields quoted where they need it, invariant
+/// numbers. Text cells that a spreadsheet would run as a formula are neutralised (see <see cref="Neutralise"/>).
+/// </summary>
+internal sealed partial class CsvWriter : IDisposable
 {
-    private readonly StringBuilder _text = new();
+    private readonly StringWriter _text = new(CultureInfo.InvariantCulture);
+    private readonly CsvHelper.CsvWriter _csv;
+
+    /// <summary>A new, empty file.</summary>
+    public CsvWriter()
+    {
+        _csv = CsvHelper.CsvWriter.Create(_text, new CsvWriterOptions
+        {
+            NewLine = "\r\n",
+            FormatProvider = CultureInfo.InvariantCulture,
+            // Neutralised here per cell instead, so that numbers and ISO dates with a minus sign stay data.
+            Injection = CsvInjection.None,
+        }, true);
+    }
 
     /// <summary>Writes one record.</summary>
     public CsvWriter Row(params object?[] fields)
     {
-        for (var i = 0; i < fields.Length; i++)
+        foreach (var field in fields)
         {
-            if (i > 0) _text.Append(',');
-            _text.Append(Escape(fields[i] switch
+            _csv.WriteField(field switch
             {
                 null => "",
                 double d => d.ToString("R", CultureInfo.InvariantCulture),
+                bool b => b ? "true" : "false",
+                string s => Neutralise(s),
                 IFormattable f => f.ToString(null, CultureInfo.InvariantCulture),
-                var other => other.ToString() ?? "",
-            }));
+                var other => Neutralise(other.ToString() ?? ""),
+            });
         }
-        _text.Append("\r\n");
+        _csv.EndRecord();
         return this;
     }
 
     /// <inheritdoc />
-    public override string ToString() => _text.ToString();
+    public override string ToString()
+    {
+        _csv.Flush();
+        return _text.ToString();
+    }
 
-    private static string Escape(string field) =>
-        field.IndexOfAny([',', '"', '\r', '\n']) >= 0 ? "\"" + field.Replace("\"", "\"\"", StringComparison.Ordinal) + "\"" : field;
+    /// <inheritdoc />
+    public void Dispose()
+    {
+        _csv.Dispose();
+        _text.Dispose();
+    }
+
+    // OWASP, "CSV Injection": a cell beginning with = + - @, tab or carriage return may be run as a formula by a
+    // spreadsheet; prefixing a single quote makes it text. Cells that are wholly a number or an ISO 8601 date or
+    // date-time (e.g. -0584-05-28, -12.5) are data, not text, and are left as they are.
+    /// <summary>A text cell made safe to open in a spreadsheet.</summary>
+    public static string Neutralise(string text) =>
+        text.Length > 0 && text[0] is '=' or '+' or '-' or '@' or '\t' or '\r' && !Data().IsMatch(text) ? "'" + text : text;
+
+    [GeneratedRegex(@"^[+-]?(\d+(\.\d+)?([eE][+-]?\d+)?|\d{4,5}-\d{2}-\d{2}(T\d{2}:\d{2}(:\d{2}(\.\d{1,9})?)?(Z|[+-]\d{2}:\d{2})?)?)$", RegexOptions.CultureInvariant)]
+    private static partial Regex Data();
 }

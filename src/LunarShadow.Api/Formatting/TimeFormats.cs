@@ -15,7 +15,7 @@ internal static partial class TimeFormats
     private static readonly double UnixEpochJulianDate = 2440587.5;
 
     /// <summary>A UTC instant, e.g. 2025-03-14T06:58:00.000Z or -1999-06-26T13:00:00.000Z.</summary>
-    public static string Utc(Instant instant) => Write(instant.ToJulianDate(), "Z");
+    public static string Utc(Instant instant) => Write(ToMillisecond(instant).ToJulianDate(), "Z");
 
     /// <summary>A TT instant without a zone, e.g. 2025-03-14T06:59:09.184.</summary>
     public static string Tt(TtInstant tt) => Write(tt.JulianDate.Day, "");
@@ -30,15 +30,18 @@ internal static partial class TimeFormats
         var seconds = offset.Seconds;
         var sign = seconds < 0 ? '-' : '+';
         var abs = Math.Abs(seconds);
-        var text = Write(instant.ToJulianDate() + seconds / 86400.0, string.Create(CultureInfo.InvariantCulture, $"{sign}{abs / 3600:00}:{abs / 60 % 60:00}"));
-        string? note = null;
-        if (zone != DateTimeZone.Utc && zone.MapLocal(instant.InZone(zone).LocalDateTime).Count > 1)
-            note = string.Create(CultureInfo.InvariantCulture, $"This local time occurs twice (clocks go back); the one at UTC{sign}{abs / 3600:00}:{abs / 60 % 60:00} is meant.");
-        return (text, note);
+        // Round the instant to the millisecond before shifting it, so that the local text is exactly the UTC text plus the offset.
+        var text = Write((ToMillisecond(instant) + Duration.FromSeconds(seconds)).ToJulianDate(), string.Create(CultureInfo.InvariantCulture, $"{sign}{abs / 3600:00}:{abs / 60 % 60:00}"));
+        return (text, SiteWording.RepeatedTimeNote(instant, zone));
     }
 
+    // A Julian date in a double resolves about 40 µs today, so each text is written from an instant already rounded to
+    // the millisecond; Write's own rounding then only undoes the double's error.
+    private static Instant ToMillisecond(Instant instant) =>
+        Instant.FromUnixTimeTicks((long)Math.Round(instant.ToUnixTimeTicks() / 10_000.0, MidpointRounding.AwayFromZero) * 10_000);
+
     /// <summary>The calendar date (astronomers' calendar) of a UTC instant, YYYY-MM-DD.</summary>
-    public static string UtcDate(Instant instant) => Write(instant.ToJulianDate(), "")[..DateLength(instant.ToJulianDate())];
+    public static string UtcDate(Instant instant) => Write(ToMillisecond(instant).ToJulianDate(), "")[..DateLength(ToMillisecond(instant).ToJulianDate())];
 
     /// <summary>A number rounded for display.</summary>
     public static double Round(double value, int digits) => Math.Round(value, digits, MidpointRounding.AwayFromZero);

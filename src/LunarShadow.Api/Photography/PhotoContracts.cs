@@ -3,6 +3,7 @@ namespace LunarShadow.Api.Photography;
 /// <summary>A photo plan: a shooting timeline with exposures, framing and sequences.</summary>
 /// <param name="Site">The site (echo).</param>
 /// <param name="Eclipse">The eclipse.</param>
+/// <param name="Night">The local dates of the night that holds the visible part.</param>
 /// <param name="Camera">The camera as understood.</param>
 /// <param name="Summary">What the site sees, in one line.</param>
 /// <param name="Model">The brightness model's settings and uncertainty.</param>
@@ -11,7 +12,7 @@ namespace LunarShadow.Api.Photography;
 /// <param name="Sequences">Multi-exposure and time-lapse plans (null when nothing is visible).</param>
 /// <param name="Cautions">Safety notes.</param>
 public sealed record PhotoPlanResponse(
-    Common.SiteEcho Site, Common.EclipseBrief Eclipse, CameraEcho Camera, string Summary, BrightnessModelEcho Model,
+    Common.SiteEcho Site, Common.EclipseBrief Eclipse, Common.NightResponse Night, CameraEcho Camera, string Summary, BrightnessModelEcho Model,
     IReadOnlyList<TimelineRowResponse> Timeline, FramingResponse Framing, SequencesResponse? Sequences, IReadOnlyList<string> Cautions);
 
 /// <summary>The camera as understood.</summary>

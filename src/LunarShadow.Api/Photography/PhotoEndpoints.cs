@@ -3,6 +3,7 @@ using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Common;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Photography;
+using NodaTime;
 
 namespace LunarShadow.Api.Photography;
 
@@ -56,11 +57,19 @@ internal static class PhotoEndpoints
 
         var plan = PhotoPlanner.Plan(eclipse, site!.Site, camera!, settings!, query.Time);
         var response = PhotoMapping.ToResponse(plan, query.Time);
+        if (query.Output == OutputFormat.Calendar)
+        {
+            if (PhotoFormats.ICalendar(plan, response, request.HttpContext.RequestServices.GetRequiredService<IClock>().GetCurrentInstant()) is { } calendar)
+                return Results.Text(calendar, ContentNegotiation.MediaType(OutputFormat.Calendar)).AsAttachment(PhotoFormats.FileName(response, OutputFormat.Calendar, "photo-plan"));
+            f.Reader.Fail("format", "iCalendar covers Gregorian dates from 1583 to 9999 only; ask for json or csv.");
+            return Problems.InvalidQuery(f.Reader);
+        }
         return query.Output switch
         {
-            OutputFormat.Csv => Results.Text(PhotoMapping.Csv(response), ContentNegotiation.MediaType(OutputFormat.Csv)),
-            OutputFormat.Calendar => LocalFormats.Calendar(plan.Local, LocalMapping.ToResponse(plan.Local, query.Time, null), f.Reader),
-            OutputFormat.Sequence => Results.Json(PhotoMapping.Sequence(response), contentType: ContentNegotiation.MediaType(OutputFormat.Sequence)),
+            OutputFormat.Csv => Results.Text(PhotoMapping.Csv(response), ContentNegotiation.MediaType(OutputFormat.Csv))
+                .AsAttachment(PhotoFormats.FileName(response, OutputFormat.Csv, "photo-plan")),
+            OutputFormat.Sequence => Results.Json(PhotoMapping.Sequence(response), contentType: ContentNegotiation.MediaType(OutputFormat.Sequence))
+                .AsAttachment(PhotoFormats.FileName(response, OutputFormat.Sequence, "photo-sequence")),
             _ => TypedResults.Ok(response),
         };
     }

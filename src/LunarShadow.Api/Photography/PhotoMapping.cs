@@ -16,12 +16,11 @@ internal static class PhotoMapping
         var f = plan.Framing;
         var s = plan.Sequences;
         return new PhotoPlanResponse(
-            local.Site, local.Eclipse,
+            local.Site, local.Eclipse, local.Night,
             new CameraEcho(c.SensorWidthMm, c.SensorHeightMm, TimeFormats.Round(c.PixelPitchMicrons, 3), c.EffectiveFocalLengthMm, c.EffectiveAperture,
                 c.ShutterSeconds is null ? c.Iso : null, c.ShutterSeconds, PhotoParameters.Mounts.First(m => m.Value == c.Mount).Key),
             local.Summary,
-            new BrightnessModelEcho(plan.Settings.Danjon, TimeFormats.Round(plan.ExtinctionPerAirMass, 4), plan.UncertaintyStops,
-                "Brightness is computed from the shadow geometry and the uneclipsed Moon; inside the umbra it is an estimate from the expected Danjon L, good to about ±1.5 stops. Bracket, and check the histogram."),
+            new BrightnessModelEcho(plan.Settings.Danjon, TimeFormats.Round(plan.ExtinctionPerAirMass, 4), plan.UncertaintyStops, SiteWording.BrightnessModelNote),
             plan.Timeline.Select(r => new TimelineRowResponse(
                 TimeFormats.Utc(r.Utc), TimeFormats.Local(r.Utc, zone).Text, r.Contact, WireNames.Of(r.Phase),
                 TimeFormats.Round(r.UmbralFraction, 4), TimeFormats.Round(r.PenumbralFraction, 4),
@@ -44,10 +43,11 @@ internal static class PhotoMapping
     public static string Csv(PhotoPlanResponse r)
     {
         var csv = new CsvWriter().Row("utc", "local", "contact", "phase", "umbral_fraction", "penumbral_fraction", "moon_altitude_deg", "moon_azimuth_deg",
-            "airmass", "brightness_stops", "shutter_s", "iso", "aperture", "bracket_stops", "warnings");
+            "airmass", "brightness_stops", "shutter_s", "iso", "aperture", "bracket_stops", "warnings", "local_date");
         foreach (var row in r.Timeline)
             csv.Row(row.Utc, row.Local, row.Contact, row.Phase, row.UmbralFraction, row.PenumbralFraction, row.MoonAltitudeDegrees, row.MoonAzimuthDegrees,
-                row.Airmass, row.BrightnessStops, row.Exposure.ShutterSeconds, row.Exposure.Iso, row.Exposure.Aperture, row.Exposure.BracketStops, string.Join("; ", row.Warnings));
+                row.Airmass, row.BrightnessStops, row.Exposure.ShutterSeconds, row.Exposure.Iso, row.Exposure.Aperture, row.Exposure.BracketStops, string.Join("; ", row.Warnings),
+                r.Night.Evening);
         return csv.ToString();
     }
 

@@ -5,6 +5,7 @@ using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Sites;
 using LunarShadow.Astronomy.Time;
+using NodaTime;
 
 namespace LunarShadow.Api.Sites;
 
@@ -33,7 +34,7 @@ internal static class LocalEndpoints
             .WithName("GetLocalCircumstances")
             .Takes(new EndpointParameters([Parameters.EclipseDate, .. Parameters.Site, Track, .. Parameters.Model, SingleFormats.Parameter]))
             .WithSummary("What one site sees of an eclipse")
-            .WithDescription("Contacts in UTC and local time with the Moon's altitude and azimuth, visibility, the Sun's altitude and sky state; moonrise, moonset and horizon-profile events; the visible part of each phase; the largest visible umbral magnitude; a plain summary; and with open=, a public-night plan. JSON, CSV (contact table) or iCalendar (one event per visible phase) by Accept or format=.")
+            .WithDescription("Contacts in UTC and local time with the Moon's altitude and azimuth, visibility, the Sun's altitude and sky state; moonrise, moonset and horizon-profile events; the visible part of each phase; the largest visible umbral magnitude; a plain summary; and with open=, a public-night plan. JSON, CSV (contacts, moon events, visible phases and the public-night plan as rows of their own kind) or iCalendar (one event per visible phase, and the public session with open=) by Accept or format=.")
             .Produces<LocalResponse>(StatusCodes.Status200OK, "application/json", "text/csv", "text/calendar")
             .ProducesEclipseProblems();
         group.MapPost("/", Post)
@@ -58,12 +59,13 @@ internal static class LocalEndpoints
         var trackMinutes = f.Number(Track);
         if (EclipseLookup.Resolve(f, query, SingleFormats, out var eclipse) is { } problem) return problem;
 
-        var response = Describe(eclipse, site!, query.Time, out var local);
+        var response = Describe(eclipse, site!, query.Time, out var local, out var plan);
         if (trackMinutes is { } step) response = response with { Track = LocalMapping.Track(local, step, query.Time) };
         return query.Output switch
         {
-            OutputFormat.Csv => Results.Text(LocalFormats.ContactsCsv(response), ContentNegotiation.MediaType(OutputFormat.Csv)),
-            OutputFormat.Calendar => LocalFormats.Calendar(local, response, f.Reader),
+            OutputFormat.Csv => Results.Text(LocalFormats.Csv(response), ContentNegotiation.MediaType(OutputFormat.Csv))
+                .AsAttachment(LocalFormats.FileName(response, OutputFormat.Csv, "local")),
+            OutputFormat.Calendar => LocalFormats.Calendar(local, plan, response, request.HttpContext.RequestServices.GetRequiredService<IClock>().GetCurrentInstant(), f.Reader),
             _ => TypedResults.Ok(response),
         };
     }
@@ -80,16 +82,18 @@ internal static class LocalEndpoints
         if (body.Sites is null && reader.IsValid) reader.Fail(BatchBody.SitesName, "sites must hold at least one site.");
         if (EclipseLookup.Resolve(f, query, BatchFormats, out var eclipse) is { } problem) return problem;
 
-        var rows = body.Sites!.Select(s => Describe(eclipse, s, query.Time, out _)).ToList();
+        var rows = body.Sites!.Select(s => Describe(eclipse, s, query.Time, out _, out _)).ToList();
         return query.Output == OutputFormat.Csv
-            ? Results.Text(LocalFormats.SitesCsv(rows), ContentNegotiation.MediaType(OutputFormat.Csv))
+            ? Results.Text(LocalFormats.BatchCsv(rows), ContentNegotiation.MediaType(OutputFormat.Csv))
+                .AsAttachment(Downloads.FileName(OutputFormat.Csv, "lunar-eclipse", rows.Count > 0 ? rows[0].Eclipse.Date : null, "sites"))
             : TypedResults.Ok(new LocalBatchResponse(rows.Count, rows));
     }
 
     // What one site sees, with its public-night plan when opening hours were given.
-    private static LocalResponse Describe(LunarEclipse eclipse, SiteParameters site, TimeScaleConverter time, out LocalCircumstances local)
+    private static LocalResponse Describe(LunarEclipse eclipse, SiteParameters site, TimeScaleConverter time, out LocalCircumstances local, out PublicNightPlan? plan)
     {
         local = LocalCircumstancesCalculator.Compute(eclipse, site.Site, time);
-        return LocalMapping.ToResponse(local, time, site.Hours is null ? null : PublicNightPlanner.Plan(local, site.Hours, time));
+        plan = site.Hours is null ? null : PublicNightPlanner.Plan(local, site.Hours, time);
+        return LocalMapping.ToResponse(local, time, plan);
     }
 }

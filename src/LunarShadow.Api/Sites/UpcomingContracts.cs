@@ -23,6 +23,7 @@ public sealed record UpcomingCriteriaEcho(string From, int Count, string Phase, 
 /// <summary>One eclipse the site can see.</summary>
 /// <param name="Date">UTC date of greatest eclipse (the eclipse's id).</param>
 /// <param name="Kind">penumbral, partial or total.</param>
+/// <param name="Night">The local dates of the night that holds the visible part.</param>
 /// <param name="GreatestEclipseUtc">Greatest eclipse, UTC.</param>
 /// <param name="GreatestEclipseLocal">Greatest eclipse, local time.</param>
 /// <param name="QualifyingMinutes">Minutes of the chosen phase that meet every criterion.</param>
@@ -30,7 +31,7 @@ public sealed record UpcomingCriteriaEcho(string From, int Count, string Phase, 
 /// <param name="GreatestVisibleUmbralMagnitude">Greatest umbral magnitude seen.</param>
 /// <param name="Summary">What the site sees, in one line.</param>
 public sealed record UpcomingItem(
-    string Date, string Kind, string GreatestEclipseUtc, string GreatestEclipseLocal, double QualifyingMinutes,
+    string Date, string Kind, NightResponse Night, string GreatestEclipseUtc, string GreatestEclipseLocal, double QualifyingMinutes,
     IReadOnlyList<VisiblePhaseResponse> Qualifying, VisibleMagnitudeResponse? GreatestVisibleUmbralMagnitude, string Summary)
 {
     /// <summary>Deprecated: the former name of <see cref="GreatestVisibleUmbralMagnitude"/>, written for one more release.</summary>

@@ -77,60 +77,33 @@ internal static class UpcomingEndpoints
         {
             var full = LocalMapping.ToResponse(u.Local, time, null);
             var greatest = time.ToUtc(u.Local.Eclipse.GreatestEclipse);
-            return new UpcomingItem(full.Eclipse.Date, full.Eclipse.Kind, TimeFormats.Utc(greatest), TimeFormats.Local(greatest, site.Site.TimeZone).Text,
+            return new UpcomingItem(full.Eclipse.Date, full.Eclipse.Kind, full.Night, TimeFormats.Utc(greatest), TimeFormats.Local(greatest, site.Site.TimeZone).Text,
                 TimeFormats.Round(u.QualifyingMinutes, 2), u.Qualifying.Select(q => LocalMapping.Phase(q, site.Site.TimeZone)).ToList(),
                 full.GreatestVisibleUmbralMagnitude, full.Summary);
         }).ToList();
         var note = items.Count < wanted
             ? $"Only {items.Count} such eclipses in the {UpcomingEclipses.MaxYearsAhead} years searched (or up to the year {SupportedRange.LastYear})."
             : null;
-        var response = new UpcomingResponse(LocalMapping.Echo(site.Site),
+        var abbreviations = found.SelectMany(u => LocalDates.Abbreviations(u.Local.Outline.Night, site.Site.TimeZone)).Distinct().ToList();
+        var response = new UpcomingResponse(LocalMapping.Echo(site.Site, abbreviations),
             new UpcomingCriteriaEcho(start.Value.ToIsoDateString(), wanted, phaseName, criteria.AstronomicalNightOnly, site.Site.MinimumAltitude.Degrees, f.Raw(Parameters.Open)?.Trim(), model.Name),
             items.Count, items, note);
 
-        return output switch
+        if (output == OutputFormat.Calendar)
         {
-            OutputFormat.Csv => Results.Text(Csv(items), ContentNegotiation.MediaType(OutputFormat.Csv)),
-            OutputFormat.Calendar => Calendar(found, site.Site, time, f.Reader),
-            _ => TypedResults.Ok(response),
-        };
+            if (UpcomingFormats.ICalendar(found, items, site.Site, SiteWording.Criteria(response.Criteria.Phase, response.Criteria.MinAltitudeDegrees, response.Criteria.AstronomicalNightOnly, response.Criteria.Open), clock.GetCurrentInstant()) is { } text)
+                return Results.Text(text, ContentNegotiation.MediaType(OutputFormat.Calendar)).AsAttachment(UpcomingFormats.FileName(response.Site, OutputFormat.Calendar));
+            f.Reader.Fail("format", "iCalendar covers Gregorian dates from 1583 to 9999 only; ask for json or csv.");
+            return Problems.InvalidQuery(f.Reader);
+        }
+        return output == OutputFormat.Csv
+            ? Results.Text(UpcomingFormats.Csv(items), ContentNegotiation.MediaType(OutputFormat.Csv)).AsAttachment(UpcomingFormats.FileName(response.Site, OutputFormat.Csv))
+            : TypedResults.Ok(response);
     }
 
     private static CalendarDate? Today(IClock clock)
     {
         var today = clock.GetCurrentInstant().InUtc().Date;
         return new CalendarDate(today.Year, today.Month, today.Day, true);
-    }
-
-    private static string Csv(IEnumerable<UpcomingItem> items)
-    {
-        var csv = new CsvWriter().Row("date", "kind", "greatest_utc", "greatest_local", "qualifying_minutes", "first_qualifying_utc", "last_qualifying_utc", "max_visible_umbral_magnitude", "summary");
-        foreach (var i in items)
-            csv.Row(i.Date, i.Kind, i.GreatestEclipseUtc, i.GreatestEclipseLocal, i.QualifyingMinutes, i.Qualifying.Count > 0 ? i.Qualifying[0].StartUtc : null,
-                i.Qualifying.Count > 0 ? i.Qualifying[^1].EndUtc : null, i.GreatestVisibleUmbralMagnitude?.Value, i.Summary);
-        return csv.ToString();
-    }
-
-    // A subscription feed: one event per eclipse, spanning its qualifying stretches, with an alarm.
-    private static IResult Calendar(List<UpcomingEclipse> found, Site site, TimeScaleConverter time, QueryReader reader)
-    {
-        if (found.Any(u => u.Qualifying.Any(q => !ICalendarWriter.CanWrite(q.StartUtc))))
-        {
-            reader.Fail("format", "iCalendar covers Gregorian dates from 1583 to 9999 only; ask for json or csv.");
-            return Problems.InvalidQuery(reader);
-        }
-        var where = site.Name ?? FormattableString.Invariant($"{site.Location.Latitude.Degrees:0.####}, {site.Location.Longitude.Degrees:0.####}");
-        var calendar = new ICalendarWriter($"Lunar eclipses visible from {where}");
-        foreach (var u in found)
-        {
-            var start = u.Qualifying.Min(q => q.StartUtc);
-            var end = u.Qualifying.Max(q => q.EndUtc);
-            var date = TimeFormats.UtcDate(time.ToUtc(u.Local.Eclipse.GreatestEclipse));
-            var kind = WireNames.Of(u.Local.Eclipse.Kind);
-            calendar.Event(FormattableString.Invariant($"{date}-{site.Location.Latitude.Degrees:0.####}-{site.Location.Longitude.Degrees:0.####}@lunarshadow"),
-                time.ToUtc(u.Local.Eclipse.GreatestEclipse), start, end, $"Lunar eclipse ({kind}) visible", u.Local.Summary, where,
-                (site.Location.Latitude.Degrees, site.Location.Longitude.Degrees), LocalFormats.AlarmMinutes);
-        }
-        return Results.Text(calendar.Finish(), ContentNegotiation.MediaType(OutputFormat.Calendar));
     }
 }

@@ -11,7 +11,6 @@ namespace LunarShadow.Astronomy.Sites;
 /// <param name="HorizonState">Whether the Moon crosses the horizon in those 24 hours.</param>
 /// <param name="VisiblePhases">The visible stretches of each phase.</param>
 /// <param name="MaxVisibleUmbralMagnitude">The largest umbral magnitude seen, or null when nothing is seen.</param>
-/// <param name="Summary">One plain line on what the site sees.</param>
 public sealed record LocalCircumstances(
     Site Site,
     LunarEclipse Eclipse,
@@ -20,12 +19,14 @@ public sealed record LocalCircumstances(
     IReadOnlyList<MoonEvent> MoonEvents,
     MoonHorizonState HorizonState,
     IReadOnlyList<VisibleSpan> VisiblePhases,
-    MaxVisibleMagnitude? MaxVisibleUmbralMagnitude,
-    string Summary)
+    MaxVisibleMagnitude? MaxVisibleUmbralMagnitude)
 {
     /// <summary>Total visible minutes of a phase.</summary>
     public double VisibleMinutes(EclipsePhase phase) => VisiblePhases.Where(p => p.Phase == phase).Sum(p => p.Minutes);
 
     /// <summary>Whether any part of the eclipse is visible.</summary>
     public bool AnyVisible => VisiblePhases.Count > 0;
+
+    /// <summary>What the site sees, as codes and numbers to write a summary from.</summary>
+    public LocalOutline Outline => LocalOutline.Of(this);
 }

@@ -58,8 +58,7 @@ public static class LocalCircumstancesCalculator
         foreach (var c in eclipse.Contacts.Where(c => c.Name >= ContactName.U3)) contacts.Add(Contact(c.Name, c.Tt, c.PositionAngle));
 
         var best = LargestVisibleMagnitude(eclipse, sky, phases, toUtc);
-        var result = new LocalCircumstances(site, eclipse, deltaT, contacts, events, horizonState, phases, best, "");
-        return result with { Summary = LocalSummary.Describe(result, time) };
+        return new LocalCircumstances(site, eclipse, deltaT, contacts, events, horizonState, phases, best);
 
         MoonEvent Event(MoonEventType type, double h)
         {

@@ -15,27 +15,25 @@ public sealed record OpeningHours(LocalTime Opens, LocalTime Closes)
     {
         for (var date = first; date <= last; date = date.PlusDays(1))
         {
-            var (opens, openNote) = Resolve(zone, date.At(Opens), opening: true);
-            var (closes, closeNote) = Resolve(zone, (SpansMidnight ? date.PlusDays(1) : date).At(Closes), opening: false);
-            var notes = new[] { openNote, closeNote }.Where(n => n is not null).ToList();
-            yield return new OpeningWindow(opens, closes, notes.Count == 0 ? null : string.Join(" ", notes));
+            var (opens, openAdjustment) = Resolve(zone, date.At(Opens), opening: true);
+            var (closes, closeAdjustment) = Resolve(zone, (SpansMidnight ? date.PlusDays(1) : date).At(Closes), opening: false);
+            yield return new OpeningWindow(opens, closes, openAdjustment, closeAdjustment);
         }
     }
 
     // A local time may not exist (clocks go forward) or occur twice (clocks go back). Never shift it silently: take the
     // moment the clocks reach it (for a skipped time, the end of the gap) or, when it occurs twice, the first occurrence
-    // for opening and the second for closing, and say so.
-    private static (Instant Instant, string? Note) Resolve(DateTimeZone zone, LocalDateTime local, bool opening)
+    // for opening and the second for closing, and report it.
+    private static (Instant Instant, ClockAdjustment? Adjustment) Resolve(DateTimeZone zone, LocalDateTime local, bool opening)
     {
         var mapping = zone.MapLocal(local);
-        var what = opening ? "opening" : "closing";
         return mapping.Count switch
         {
             1 => (mapping.Single().ToInstant(), null),
-            0 => (mapping.LateInterval.Start,
-                $"The {what} time {local:HH:mm} on {local:yyyy-MM-dd} does not exist (clocks go forward); taken as {mapping.LateInterval.Start.InZone(zone):HH:mm}."),
-            _ => (opening ? mapping.First().ToInstant() : mapping.Last().ToInstant(),
-                $"The {what} time {local:HH:mm} on {local:yyyy-MM-dd} occurs twice (clocks go back); the {(opening ? "first" : "second")} is used."),
+            0 => (mapping.LateInterval.Start, new ClockAdjustment(local, ClockAdjustmentKind.SkippedTakenAsEndOfGap)),
+            _ => opening
+                ? (mapping.First().ToInstant(), new ClockAdjustment(local, ClockAdjustmentKind.RepeatedFirstUsed))
+                : (mapping.Last().ToInstant(), new ClockAdjustment(local, ClockAdjustmentKind.RepeatedSecondUsed)),
         };
     }
 }
@@ -43,5 +41,24 @@ public sealed record OpeningHours(LocalTime Opens, LocalTime Closes)
 /// <summary>One opening of the window, as instants.</summary>
 /// <param name="Opens">When the doors open.</param>
 /// <param name="Closes">When they close.</param>
-/// <param name="Note">What was done about a daylight-saving change, if one touched the window.</param>
-public sealed record OpeningWindow(Instant Opens, Instant Closes, string? Note);
+/// <param name="OpensAdjustment">What was done because a daylight-saving change touched the opening time, if anything.</param>
+/// <param name="ClosesAdjustment">The same for the closing time.</param>
+public sealed record OpeningWindow(Instant Opens, Instant Closes, ClockAdjustment? OpensAdjustment = null, ClockAdjustment? ClosesAdjustment = null);
+
+/// <summary>How a local clock reading touched by a daylight-saving change was resolved.</summary>
+/// <param name="Asked">The local date and time asked for.</param>
+/// <param name="Kind">What was done.</param>
+public sealed record ClockAdjustment(LocalDateTime Asked, ClockAdjustmentKind Kind);
+
+/// <summary>What was done with a local time that does not exist or occurs twice.</summary>
+public enum ClockAdjustmentKind
+{
+    /// <summary>It does not exist (clocks go forward); the moment the clocks reach it, the end of the gap, is used.</summary>
+    SkippedTakenAsEndOfGap,
+
+    /// <summary>It occurs twice (clocks go back); the first occurrence is used.</summary>
+    RepeatedFirstUsed,
+
+    /// <summary>It occurs twice (clocks go back); the second occurrence is used.</summary>
+    RepeatedSecondUsed,
+}

@@ -1,4 +1,3 @@
-using System.Globalization;
 using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Time;
 using NodaTime;
@@ -48,10 +47,10 @@ public static class PublicNightPlanner
         var showable = Showable(local, greatestUtc, window).ToList();
         if (showable.Count == 0)
         {
-            var note = !local.AnyVisible ? "Nothing of this eclipse is visible from here."
-                : inWindow.Count == 0 ? $"The eclipse is visible from here, but entirely outside the opening hours ({Clock(window.Opens, zone)}–{Clock(window.Closes, zone)})."
-                : "Only the faint penumbral phase falls within the opening hours; it is hard to notice by eye.";
-            return new PublicNightPlan(window, inWindow, null, note);
+            var outcome = !local.AnyVisible ? PublicNightOutcome.NothingVisible
+                : inWindow.Count == 0 ? PublicNightOutcome.OutsideOpeningHours
+                : PublicNightOutcome.OnlyFaintPenumbra;
+            return new PublicNightPlan(window, inWindow, null, outcome);
         }
 
         var doorsOpen = Max(window.Opens, showable[0].Start - Lead);
@@ -62,11 +61,7 @@ public static class PublicNightPlanner
         var session = new SuggestedSession(doorsOpen, doorsClose,
             sky.MoonAt(Math.Clamp(HoursAt(doorsOpen), -EclipseNightSky.HalfWidthHours, EclipseNightSky.HalfWidthHours)).ApparentAltitude,
             sky.MoonAt(Math.Clamp(HoursAt(doorsClose), -EclipseNightSky.HalfWidthHours, EclipseNightSky.HalfWidthHours)).ApparentAltitude);
-        var totalInWindow = inWindow.Where(p => p.Phase == EclipsePhase.Total).Sum(p => p.Minutes);
-        var planNote = $"Suggested session {Clock(doorsOpen, zone)}–{Clock(doorsClose, zone)} local time"
-            + (totalInWindow > 0 ? string.Create(CultureInfo.InvariantCulture, $", with {totalInWindow:0} minutes of totality inside opening hours.") : ".");
-        if (window.Note is not null) planNote += " " + window.Note;
-        return new PublicNightPlan(window, inWindow, session, planNote);
+        return new PublicNightPlan(window, inWindow, session, PublicNightOutcome.Session);
     }
 
     private static IEnumerable<(Instant Start, Instant End)> Showable(LocalCircumstances local, Instant greatestUtc, OpeningWindow window)
@@ -98,6 +93,4 @@ public static class PublicNightPlanner
     private static Instant Max(Instant a, Instant b) => a > b ? a : b;
 
     private static Instant Min(Instant a, Instant b) => a < b ? a : b;
-
-    private static string Clock(Instant instant, DateTimeZone zone) => instant.InZone(zone).ToString("HH:mm", CultureInfo.InvariantCulture);
 }

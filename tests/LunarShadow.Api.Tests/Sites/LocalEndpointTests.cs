@@ -100,16 +100,17 @@ public class LocalEndpointTests(ApiFactory factory) : IClassFixture<ApiFactory>
         Assert.Equal(3, lines.Count(l => l == "BEGIN:VEVENT"));
         Assert.Equal(1, lines.Count(l => l == "BEGIN:VALARM"));
         Assert.Contains("LOCATION:Saltmarsh Bay Planetarium", lines);
-        Assert.Contains(lines, l => l.StartsWith("GEO:40.7;-74", StringComparison.Ordinal));
+        Assert.Contains(lines, l => l.StartsWith("GEO:40.7", StringComparison.Ordinal) && l.Contains(";-74", StringComparison.Ordinal));
     }
 
     [Fact]
-    public async Task Csv_gives_the_contact_table()
+    public async Task Csv_gives_the_contact_table_with_events_phases_and_the_summary_as_rows_of_their_own_kind()
     {
         var text = await (await _client.GetAsync("/api/v1/eclipses/2025-03-14/local?lat=40.7&lon=-74&format=csv")).Content.ReadAsStringAsync();
         var lines = text.Split("\r\n", StringSplitOptions.RemoveEmptyEntries);
-        Assert.StartsWith("contact,utc,local,moon_altitude_deg", lines[0], StringComparison.Ordinal);
-        Assert.Equal(8, lines.Length);
+        Assert.StartsWith("kind,name,local_date,utc,local,", lines[0], StringComparison.Ordinal);
+        Assert.Equal(7, lines.Count(l => l.StartsWith("contact,", StringComparison.Ordinal)));
+        Assert.Single(lines, l => l.StartsWith("summary,", StringComparison.Ordinal));
     }
 
     [Fact]

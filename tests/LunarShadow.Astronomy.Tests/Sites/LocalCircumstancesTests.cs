@@ -29,7 +29,9 @@ public class LocalCircumstancesTests
         var europe = At(2011, 6, 15, 48.85, 2.35, "Europe/Paris");
         var rise = europe.MoonEvents.Single(e => e.Type == MoonEventType.Rise && e.Tt > europe.Eclipse.Contact(ContactName.P1)!.Tt && e.Tt < europe.Eclipse.Contact(ContactName.P4)!.Tt);
         Assert.Equal(rise.Tt, europe.VisiblePhases[0].StartTt);
-        Assert.Contains("comes into view", europe.Summary, StringComparison.Ordinal);
+        Assert.Equal(SiteVisibility.Part, europe.Outline.Visibility);
+        Assert.Equal(rise.Utc, europe.Outline.ComesIntoView!.Utc);
+        Assert.Null(europe.Outline.LostFromView);
     }
 
     // NASA eclipse predictions (F. Espenak), 2015 April 04 (from memory): seen whole across the Pacific; in eastern North
@@ -42,7 +44,9 @@ public class LocalCircumstancesTests
         var set = east.MoonEvents.Single(e => e.Type == MoonEventType.Set && e.Tt > east.Eclipse.Contact(ContactName.U1)!.Tt && e.Tt < east.Eclipse.Contact(ContactName.U2)!.Tt);
         Assert.Equal(set.Tt, east.VisiblePhases.Where(p => p.Phase == EclipsePhase.Partial).Single().EndTt);
         Assert.Equal(0, east.VisibleMinutes(EclipsePhase.Total));
-        Assert.Contains("lost from view", east.Summary, StringComparison.Ordinal);
+        Assert.Equal(set.Utc, east.Outline.LostFromView!.Utc);
+        Assert.Equal(EclipsePhase.Partial, east.Outline.LostFromView.Stage);
+        Assert.Equal([EclipsePhase.Total], east.Outline.MissedPhases);
     }
 
     // NASA eclipse predictions (F. Espenak), 2025 March 14 (from memory): the whole eclipse is visible from the Americas;

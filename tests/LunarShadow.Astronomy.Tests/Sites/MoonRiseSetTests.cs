@@ -68,7 +68,7 @@ public class MoonRiseSetTests
         Assert.Equal(MoonHorizonState.DownThroughout, local.HorizonState);
         Assert.Empty(local.MoonEvents);
         Assert.False(local.AnyVisible);
-        Assert.StartsWith("Not visible", local.Summary, StringComparison.Ordinal);
+        Assert.Equal(SiteVisibility.NoneMoonDownThroughout, local.Outline.Visibility);
     }
 
     // Common practice: in the Arctic near a midwinter full Moon the Moon stays up all day. 2010 December 21 total eclipse

@@ -1,0 +1,21 @@
+using Microsoft.AspNetCore.Hosting;
+using Microsoft.AspNetCore.Mvc.Testing;
+
+namespace LunarShadow.Api.Tests.Support;
+
+/// <summary>An in-memory host whose rate limit is raised, for tests that walk many eclipses and sites.</summary>
+public sealed class UnthrottledApiFactory : WebApplicationFactory<Program>
+{
+    protected override void ConfigureWebHost(IWebHostBuilder builder)
+    {
+        builder.UseSetting("RateLimiting:PermitsPerSecond", "1000000");
+        builder.UseSetting("RateLimiting:Burst", "1000000");
+    }
+}
+
+/// <summary>The export tests share one unthrottled host (one start-up, one logger).</summary>
+[CollectionDefinition(Name)]
+public sealed class ExportHost : ICollectionFixture<UnthrottledApiFactory>
+{
+    public const string Name = "exports";
+}
