@@ -264,7 +264,7 @@ public class PageTests(BrowserFixture fixture)
         var csvText = await File.ReadAllTextAsync((await csv.PathAsync())!);
         Assert.StartsWith("kind,name,local_date,utc,local,", csvText, StringComparison.Ordinal);
         Assert.Equal(7, csvText.Split("\r\n", StringSplitOptions.RemoveEmptyEntries).Count(l => l.StartsWith("contact,", StringComparison.Ordinal)));
-        var ics = await s.Page.RunAndWaitForDownloadAsync(() => page.ClickAsync("text=Add to calendar (iCalendar)"));
+        var ics = await s.Page.RunAndWaitForDownloadAsync(() => s.Page.ClickAsync("text=Add to calendar (iCalendar)"));
         var icsText = await File.ReadAllTextAsync((await ics.PathAsync())!);
         Assert.StartsWith("BEGIN:VCALENDAR\r\n", icsText, StringComparison.Ordinal);
         Assert.Contains("BEGIN:VEVENT", icsText, StringComparison.Ordinal);
