@@ -101,8 +101,10 @@ internal static class LocalEndpoints
         var time = new TimeScaleConverter(body.DeltaT ?? Astronomy.Time.DeltaTModelCatalog.Default);
         if (EclipseLookup.Resolve(reader, day, date, output, BatchFormats, body.Model ?? Astronomy.Shadow.ShadowModel.Danjon, time, out var eclipse) is { } problem) return problem;
 
+        var aborted = request.HttpContext.RequestAborted;
         var rows = body.Sites!.Select(s =>
         {
+            aborted.ThrowIfCancellationRequested(); // stop at the deadline or when the client goes away, per site
             var local = LocalCircumstancesCalculator.Compute(eclipse, s.Site, time);
             return LocalMapping.ToResponse(local, time, s.Hours is null ? null : PublicNightPlanner.Plan(local, s.Hours, time));
         }).ToList();

@@ -68,13 +68,8 @@ internal static class UpcomingEndpoints
             nightName == "true", null, hours);
         var startTt = TtInstant.FromJulianDate(JulianDate.FromCalendar(start.Value.Year, start.Value.Month, start.Value.Day, start.Value.IsGregorian).Day);
         var aborted = request.HttpContext.RequestAborted;
-        var found = UpcomingEclipses.From(EclipseFinder.For(model), site, time, startTt, criteria)
-            .Select(u =>
-            {
-                aborted.ThrowIfCancellationRequested(); // honours the request timeout on long searches
-                return u;
-            })
-            .Take(wanted).ToList();
+        // Stops at the request's deadline or when the client goes away (checked per eclipse scanned).
+        var found = UpcomingEclipses.From(EclipseFinder.For(model), site, time, startTt, criteria, aborted).Take(wanted).ToList();
         var items = found.Select(u =>
         {
             var full = LocalMapping.ToResponse(u.Local, time, null);
