@@ -34,13 +34,19 @@ internal sealed class BatchBody
             }
         }
         JsonDocument document;
+        var bytes = buffer.ToArray();
         try
         {
-            document = JsonDocument.Parse(buffer.ToArray(), new JsonDocumentOptions { MaxDepth = 16 });
+            document = JsonDocument.Parse(bytes, new JsonDocumentOptions { MaxDepth = 16 });
         }
         catch (JsonException e)
         {
-            reader.Fail("body", $"body must be a JSON object {{\"sites\": [ … ]}}; it could not be read: {e.Message}");
+            JsonText.FailUnreadable(reader, bytes, e, "a JSON object {\"sites\": [ … ]}");
+            return result;
+        }
+        if (!JsonText.NamesAreText(document.RootElement, reader))
+        {
+            document.Dispose();
             return result;
         }
         using (document)
@@ -90,7 +96,7 @@ internal sealed class BatchBody
             case JsonValueKind.Number:
                 return value.GetRawText();
             case JsonValueKind.String:
-                return value.GetString();
+                return JsonText.String(value, prefix + name, reader);
             case JsonValueKind.Array when name == "horizon":
                 var points = new List<string>();
                 foreach (var p in value.EnumerateArray())

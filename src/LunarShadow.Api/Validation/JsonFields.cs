@@ -17,9 +17,11 @@ internal static class JsonFields
             buffer.Write(chunk, 0, read);
             if (buffer.Length > maxBytes) return null;
         }
+        var bytes = buffer.ToArray();
         try
         {
-            using var document = JsonDocument.Parse(buffer.ToArray(), new JsonDocumentOptions { MaxDepth = 8 });
+            using var document = JsonDocument.Parse(bytes, new JsonDocumentOptions { MaxDepth = 8 });
+            if (!JsonText.NamesAreText(document.RootElement, reader)) return null;
             if (document.RootElement.ValueKind != JsonValueKind.Object)
             {
                 reader.Fail("body", "The body must be a JSON object of named fields.");
@@ -31,7 +33,7 @@ internal static class JsonFields
                 switch (property.Value.ValueKind)
                 {
                     case JsonValueKind.Number: fields[property.Name] = property.Value.GetRawText(); break;
-                    case JsonValueKind.String: fields[property.Name] = property.Value.GetString(); break;
+                    case JsonValueKind.String: fields[property.Name] = JsonText.String(property.Value, property.Name, reader); break;
                     case JsonValueKind.Null: break;
                     case JsonValueKind.True or JsonValueKind.False: fields[property.Name] = property.Value.GetRawText(); break;
                     default: reader.Fail(property.Name, $"{property.Name} must be a number or a string; got a JSON {property.Value.ValueKind.ToString().ToLowerInvariant()}."); break;
@@ -41,7 +43,12 @@ internal static class JsonFields
         }
         catch (JsonException e)
         {
-            reader.Fail("body", $"body must be a JSON object; it could not be read: {e.Message}");
+            JsonText.FailUnreadable(reader, bytes, e, "a JSON object");
+            return null;
+        }
+        catch (InvalidOperationException)
+        {
+            reader.Fail("body", "body field names must be valid Unicode text; one holds an unpaired surrogate escape.");
             return null;
         }
     }

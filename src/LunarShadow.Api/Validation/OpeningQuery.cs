@@ -36,6 +36,7 @@ internal static partial class OpeningQuery
         return true;
     }
 
-    [GeneratedRegex(@"^(?<oh>\d{2}):(?<om>\d{2})-(?<ch>\d{2}):(?<cm>\d{2})$", RegexOptions.CultureInvariant)]
+    // ASCII digits only: \d would also match other scripts' digits, which the number parser then refuses.
+    [GeneratedRegex(@"^(?<oh>[0-9]{2}):(?<om>[0-9]{2})-(?<ch>[0-9]{2}):(?<cm>[0-9]{2})$", RegexOptions.CultureInvariant)]
     private static partial Regex Syntax();
 }
