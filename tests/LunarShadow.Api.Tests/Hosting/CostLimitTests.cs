@@ -19,7 +19,7 @@ public class CostLimitTests
             b.UseSetting("RateLimiting:Burst", "1000");
             b.UseSetting("RateLimiting:ExpensivePerClient", "1");
             b.UseSetting("RateLimiting:ExpensiveQueuePerClient", "0");
-            b.UseSetting("RequestTimeoutSeconds", "3");
+            b.UseSetting("RequestTimeoutSeconds", "15");
         });
         var client = factory.CreateClient();
         Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/api/v1/eclipses/2025-03-14")).StatusCode); // host started
@@ -29,9 +29,9 @@ public class CostLimitTests
         // While one search runs, the same client's cheap requests still get through.
         Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/api/v1/eclipses/2025-03-14/local?lat=47.07&lon=15.44")).StatusCode);
         var statuses = new[] { (await first).StatusCode, (await second).StatusCode };
-        // One ran (and ran out of its 3 s); the other was refused at once with 429 and a Retry-After.
-        Assert.Contains(HttpStatusCode.ServiceUnavailable, statuses);
-        Assert.Contains(HttpStatusCode.TooManyRequests, statuses);
+        // One was refused at once with 429; the other ran (to its end, or to its 15 s deadline on a slow machine).
+        Assert.Single(statuses, HttpStatusCode.TooManyRequests);
+        Assert.Single(statuses, s => s is HttpStatusCode.OK or HttpStatusCode.ServiceUnavailable);
     }
 
     [Fact]
