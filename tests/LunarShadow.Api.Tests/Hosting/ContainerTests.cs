@@ -105,7 +105,7 @@ public partial class ContainerTests
             Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/")).StatusCode);
             Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/api/v1/eclipses/2025-03-14")).StatusCode);
             // The image's HEALTHCHECK command, as the container runtime runs it: healthy when one of 3 tries (--retries=3)
-            // exits 0. (Each try starts a new process with a 3 s budget for the request, which a loaded machine can miss.)
+            // exits 0. (Each try starts a new process with 8 s for the request, which a heavily loaded machine can miss.)
             var probes = new List<int>();
             for (var i = 0; i < 3 && !probes.Contains(0); i++)
                 probes.Add((await Run("dotnet", [Path.Combine(app.FullName, "LunarShadow.Api.dll"), "--health-probe", $"http://127.0.0.1:{listenPort}/health/ready"], app.FullName, TimeSpan.FromMinutes(1))).ExitCode);
