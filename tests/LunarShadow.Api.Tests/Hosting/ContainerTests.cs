@@ -98,7 +98,7 @@ public partial class ContainerTests
             service.BeginOutputReadLine();
             service.BeginErrorReadLine();
 
-            using var client = new HttpClient { BaseAddress = new Uri($"http://127.0.0.1:{listenPort}"), Timeout = TimeSpan.FromSeconds(10) };
+            using var client = new HttpClient { BaseAddress = new Uri($"http://127.0.0.1:{listenPort}"), Timeout = TimeSpan.FromSeconds(60) }; // a cold first answer on a busy machine
             var live = await WaitForLive(client, service, TimeSpan.FromSeconds(90));
             Assert.True(live, "no answer on the container port: " + log);
             Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/health/ready")).StatusCode);
