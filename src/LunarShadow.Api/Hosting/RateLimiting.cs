@@ -13,6 +13,9 @@ internal sealed class RateLimitOptions
     /// <summary>Requests a client may make in a burst (default 200).</summary>
     public int Burst { get; set; } = 200;
 
+    /// <summary>How often the bucket is refilled, in seconds (default 1), with PermitsPerSecond for each second.</summary>
+    public int ReplenishmentSeconds { get; set; } = 1;
+
     /// <summary>Expensive requests (searches, catalogue ranges, batches) one client may have running at once (default 1).</summary>
     public int ExpensivePerClient { get; set; } = 1;
 
@@ -63,8 +66,8 @@ internal static class RateLimiting
                     ? RateLimitPartition.GetTokenBucketLimiter(ClientKey(context), _ => new TokenBucketRateLimiterOptions
                     {
                         TokenLimit = Math.Max(1, options.Burst),
-                        TokensPerPeriod = Math.Max(1, options.PermitsPerSecond),
-                        ReplenishmentPeriod = TimeSpan.FromSeconds(1),
+                        TokensPerPeriod = Math.Max(1, options.PermitsPerSecond) * Math.Max(1, options.ReplenishmentSeconds),
+                        ReplenishmentPeriod = TimeSpan.FromSeconds(Math.Max(1, options.ReplenishmentSeconds)),
                         QueueLimit = 0,
                         AutoReplenishment = true,
                     })

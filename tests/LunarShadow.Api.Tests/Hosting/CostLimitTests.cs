@@ -41,6 +41,7 @@ public class CostLimitTests
         {
             b.UseSetting("RateLimiting:PermitsPerSecond", "1");
             b.UseSetting("RateLimiting:Burst", "2");
+            b.UseSetting("RateLimiting:ReplenishmentSeconds", "3600"); // no refill during the test
         });
         var client = factory.CreateClient();
         var first = await client.GetAsync("/openapi/v1.json");

@@ -31,6 +31,7 @@ public class ForwardedHeadersTests
     {
         b.UseSetting("RateLimiting:PermitsPerSecond", "1");
         b.UseSetting("RateLimiting:Burst", "2");
+        b.UseSetting("RateLimiting:ReplenishmentSeconds", "3600"); // no refill during the test, however slow the machine
         configure(b);
     });
 

@@ -81,6 +81,7 @@ public class RateLimitTests
         {
             b.UseSetting("RateLimiting:PermitsPerSecond", "1");
             b.UseSetting("RateLimiting:Burst", "3");
+            b.UseSetting("RateLimiting:ReplenishmentSeconds", "3600"); // no refill during the test
         });
         var client = factory.CreateClient();
         var statuses = new List<HttpStatusCode>();
