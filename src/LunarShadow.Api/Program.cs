@@ -1,11 +1,8 @@
 using LunarShadow.Api.Hosting;
-using Serilog;
 
 // `--health-probe URL`: exit 0 when URL answers 200 (the container health check; the runtime image has no curl).
 if (args is ["--health-probe", var probe])
     return await HealthProbe.RunAsync(new Uri(probe));
-
-Log.Logger = new LoggerConfiguration().WriteTo.Console().CreateBootstrapLogger();
 
 var builder = WebApplication.CreateBuilder(args);
 builder.AddLunarShadowServices();

@@ -35,12 +35,13 @@ internal static class EclipseLookup
     }
 
     /// <summary>Eclipses whose greatest phase falls in [startDay, endDay) of UTC (Julian dates of 0h UTC).</summary>
-    public static IEnumerable<LunarEclipse> InDateRange(ShadowModel model, TimeScaleConverter time, double startDay, double endDay)
+    public static IEnumerable<LunarEclipse> InDateRange(ShadowModel model, TimeScaleConverter time, double startDay, double endDay,
+        CancellationToken cancellationToken = default)
     {
         // ΔT reaches about 13 hours at the ends of the span; search a day beyond each end, then keep by UTC.
         var from = TtInstant.FromJulianDate(startDay - 1);
         var to = TtInstant.FromJulianDate(endDay + 1);
-        foreach (var e in EclipseFinder.For(model).Between(from, to))
+        foreach (var e in EclipseFinder.For(model).Between(from, to, cancellationToken))
         {
             var utc = time.ToUtc(e.GreatestEclipse).ToJulianDate();
             if (utc >= startDay && utc < endDay) yield return e;

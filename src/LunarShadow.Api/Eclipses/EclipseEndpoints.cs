@@ -66,12 +66,8 @@ internal static class EclipseEndpoints
         if (output is null) return Problems.NotAcceptable(Formats.Formats);
 
         var aborted = request.HttpContext.RequestAborted;
-        var eclipses = EclipseLookup.InDateRange(model, time, DayOf(first.Value), DayOf(last.Value) + 1)
-            .Select(e =>
-            {
-                aborted.ThrowIfCancellationRequested(); // honours the request timeout on long ranges
-                return e;
-            })
+        // Stops at the request's deadline or when the client goes away (checked per full Moon scanned).
+        var eclipses = EclipseLookup.InDateRange(model, time, DayOf(first.Value), DayOf(last.Value) + 1, aborted)
             .Where(e => kinds.Contains(WireNames.Of(e.Kind)))
             .Select(e => EclipseMapping.ToResponse(e, time))
             .ToList();

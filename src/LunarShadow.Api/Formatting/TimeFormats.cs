@@ -56,6 +56,8 @@ internal static partial class TimeFormats
         var m = InstantSyntax().Match(text.Trim());
         if (!m.Success) return false;
         if (!TryDate(m.Groups["date"].Value, out var date)) return false;
+        // Range-check before converting: years far outside the span (e.g. 10000) cannot become an Instant at all.
+        if (date.Year < SupportedRange.FirstYear - 1 || date.Year > SupportedRange.LastYear + 1) return false;
         var hour = int.Parse(m.Groups["h"].Value, CultureInfo.InvariantCulture);
         var minute = int.Parse(m.Groups["min"].Value, CultureInfo.InvariantCulture);
         var second = m.Groups["s"].Success ? double.Parse(m.Groups["s"].Value, CultureInfo.InvariantCulture) : 0;
@@ -113,9 +115,10 @@ internal static partial class TimeFormats
 
     private static int DateLength(double jd) => Write(jd, "").IndexOf('T', StringComparison.Ordinal);
 
-    [GeneratedRegex(@"^(?<y>-?\d{4,5})-(?<m>\d{2})-(?<d>\d{2})$", RegexOptions.CultureInvariant)]
+    // ASCII digits only: \d would also match other scripts' digits, which the number parser then refuses.
+    [GeneratedRegex(@"^(?<y>-?[0-9]{4,5})-(?<m>[0-9]{2})-(?<d>[0-9]{2})$", RegexOptions.CultureInvariant)]
     private static partial Regex DateSyntax();
 
-    [GeneratedRegex(@"^(?<date>-?\d{4,5}-\d{2}-\d{2})T(?<h>\d{2}):(?<min>\d{2})(:(?<s>\d{2}(\.\d{1,9})?))?(?<zone>Z|[+-](?<oh>\d{2}):(?<om>\d{2}))$", RegexOptions.CultureInvariant)]
+    [GeneratedRegex(@"^(?<date>-?[0-9]{4,5}-[0-9]{2}-[0-9]{2})T(?<h>[0-9]{2}):(?<min>[0-9]{2})(:(?<s>[0-9]{2}(\.[0-9]{1,9})?))?(?<zone>Z|[+-](?<oh>[0-9]{2}):(?<om>[0-9]{2}))$", RegexOptions.CultureInvariant)]
     private static partial Regex InstantSyntax();
 }

@@ -36,6 +36,9 @@ internal sealed class EntityTagMiddleware(RequestDelegate next)
         {
             context.Response.Body = original;
         }
+        // A request that ran out of time or lost its client is never tagged or sent as if it were whole: the deadline
+        // middleware answers it.
+        context.RequestAborted.ThrowIfCancellationRequested();
         if (context.Response.StatusCode != StatusCodes.Status200OK)
         {
             buffer.Position = 0;

@@ -8,7 +8,8 @@ internal static class HealthProbe
         if (!url.IsLoopback) return 2;
         try
         {
-            using var client = new HttpClient { Timeout = TimeSpan.FromSeconds(3) };
+            // Within the HEALTHCHECK's --timeout=10s, with room for the process to start on a busy node.
+            using var client = new HttpClient { Timeout = TimeSpan.FromSeconds(8) };
             using var response = await client.GetAsync(url);
             return response.IsSuccessStatusCode ? 0 : 1;
         }

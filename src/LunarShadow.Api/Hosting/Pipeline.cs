@@ -17,14 +17,19 @@ internal static class Pipeline
 
     public static WebApplication UseLunarShadowPipeline(this WebApplication app)
     {
+        app.UseLunarShadowForwardedHeaders();
         app.UseMiddleware<CorrelationIdMiddleware>();
         app.UseSerilogRequestLogging();
         app.UseExceptionHandler();
         app.UseStatusCodePages();
+        app.UseMiddleware<ResponseHeadersMiddleware>();
+        app.UsePublicReadCors();
+        // The deadline wraps the limiter (a wait for a turn counts against it) and everything that may buffer, tag or
+        // cache a body, so that nothing is tagged or kept from a request that did not finish.
+        app.UseMiddleware<RequestDeadlineMiddleware>();
         app.UseRateLimiter();
         app.UseMiddleware<EntityTagMiddleware>();
         app.UseResponseCompression();
-        app.UseRequestTimeouts();
         app.UseOutputCache();
         return app;
     }

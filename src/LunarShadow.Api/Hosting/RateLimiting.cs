@@ -12,35 +12,94 @@ internal sealed class RateLimitOptions
 
     /// <summary>Requests a client may make in a burst (default 200).</summary>
     public int Burst { get; set; } = 200;
+
+    /// <summary>How often the bucket is refilled, in seconds (default 1), with PermitsPerSecond for each second.</summary>
+    public int ReplenishmentSeconds { get; set; } = 1;
+
+    /// <summary>Expensive requests (searches, catalogue ranges, batches) one client may have running at once (default 1).</summary>
+    public int ExpensivePerClient { get; set; } = 1;
+
+    /// <summary>Expensive requests of one client that may wait for their turn (default 2); more get 429.</summary>
+    public int ExpensiveQueuePerClient { get; set; } = 2;
+
+    /// <summary>
+    /// Expensive requests running at once over all clients (default: one fewer than the processor count, at least 1),
+    /// so that a core is always left for the cheap and cached answers.
+    /// </summary>
+    public int ExpensiveTotal { get; set; } = Math.Max(1, Environment.ProcessorCount - 1);
+
+    /// <summary>Expensive requests over all clients that may wait for their turn (default 16); more get 429.</summary>
+    public int ExpensiveQueueTotal { get; set; } = 16;
 }
 
-/// <summary>A token bucket per client address; rejected requests get 429, a Retry-After and a problem response.</summary>
+/// <summary>
+/// Limits per client — by address, which behind a trusted proxy is the forwarded client address (see
+/// <see cref="ForwardedHeaders"/>): a token bucket over every API request, and for the expensive endpoints a concurrency
+/// limit per client and over all clients, so that one caller's long searches cannot starve everyone's cheap answers.
+/// Rejected requests get 429, a Retry-After and a problem response.
+/// </summary>
 internal static class RateLimiting
 {
+    /// <summary>True for the requests whose cost grows with what they ask for.</summary>
+    public static bool IsExpensive(HttpRequest request)
+    {
+        var path = request.Path;
+        if (path.StartsWithSegments("/api/v1/sites/upcoming")) return true;
+        if (path.Equals("/api/v1/eclipses", StringComparison.OrdinalIgnoreCase) || path.Equals("/api/v1/eclipses/", StringComparison.OrdinalIgnoreCase)) return true;
+        if (path.StartsWithSegments("/api/v1/eclipses") && path.Value!.EndsWith("/visibility-map", StringComparison.OrdinalIgnoreCase)) return true;
+        return HttpMethods.IsPost(request.Method) && path.StartsWithSegments("/api");
+    }
+
+    /// <summary>The client a request is counted against: its (possibly forwarded) address.</summary>
+    public static string ClientKey(HttpContext context) => context.Connection.RemoteIpAddress?.ToString() ?? "unknown";
+
+    private static bool IsLimited(HttpContext context) =>
+        context.Request.Path.StartsWithSegments("/api") || context.Request.Path.StartsWithSegments("/openapi");
+
     public static IServiceCollection AddLunarShadowRateLimiting(this IServiceCollection services, IConfiguration configuration)
     {
         var options = configuration.GetSection("RateLimiting").Get<RateLimitOptions>() ?? new RateLimitOptions();
         services.AddRateLimiter(limiter =>
         {
-            limiter.GlobalLimiter = PartitionedRateLimiter.Create<HttpContext, string>(context =>
-                context.Request.Path.StartsWithSegments("/api")
-                    ? RateLimitPartition.GetTokenBucketLimiter(context.Connection.RemoteIpAddress?.ToString() ?? "unknown", _ => new TokenBucketRateLimiterOptions
+            var perClient = PartitionedRateLimiter.Create<HttpContext, string>(context =>
+                IsLimited(context)
+                    ? RateLimitPartition.GetTokenBucketLimiter(ClientKey(context), _ => new TokenBucketRateLimiterOptions
                     {
                         TokenLimit = Math.Max(1, options.Burst),
-                        TokensPerPeriod = Math.Max(1, options.PermitsPerSecond),
-                        ReplenishmentPeriod = TimeSpan.FromSeconds(1),
+                        TokensPerPeriod = Math.Max(1, options.PermitsPerSecond) * Math.Max(1, options.ReplenishmentSeconds),
+                        ReplenishmentPeriod = TimeSpan.FromSeconds(Math.Max(1, options.ReplenishmentSeconds)),
                         QueueLimit = 0,
                         AutoReplenishment = true,
                     })
                     : RateLimitPartition.GetNoLimiter("unlimited"));
+            var expensivePerClient = PartitionedRateLimiter.Create<HttpContext, string>(context =>
+                IsLimited(context) && IsExpensive(context.Request)
+                    ? RateLimitPartition.GetConcurrencyLimiter(ClientKey(context), _ => new ConcurrencyLimiterOptions
+                    {
+                        PermitLimit = Math.Max(1, options.ExpensivePerClient),
+                        QueueLimit = Math.Max(0, options.ExpensiveQueuePerClient),
+                        QueueProcessingOrder = QueueProcessingOrder.OldestFirst,
+                    })
+                    : RateLimitPartition.GetNoLimiter("unlimited"));
+            var expensiveTotal = PartitionedRateLimiter.Create<HttpContext, string>(context =>
+                IsLimited(context) && IsExpensive(context.Request)
+                    ? RateLimitPartition.GetConcurrencyLimiter("all-clients", _ => new ConcurrencyLimiterOptions
+                    {
+                        PermitLimit = Math.Max(1, options.ExpensiveTotal),
+                        QueueLimit = Math.Max(0, options.ExpensiveQueueTotal),
+                        QueueProcessingOrder = QueueProcessingOrder.OldestFirst,
+                    })
+                    : RateLimitPartition.GetNoLimiter("unlimited"));
+            limiter.GlobalLimiter = PartitionedRateLimiter.CreateChained(perClient, expensivePerClient, expensiveTotal);
             limiter.OnRejected = async (context, token) =>
             {
                 var response = context.HttpContext.Response;
                 response.StatusCode = StatusCodes.Status429TooManyRequests;
                 var retryAfter = context.Lease.TryGetMetadata(MetadataName.RetryAfter, out var wait) ? Math.Max(1, (int)Math.Ceiling(wait.TotalSeconds)) : 1;
                 response.Headers.RetryAfter = retryAfter.ToString(CultureInfo.InvariantCulture);
+                response.Headers.CacheControl = "no-store";
                 await Results.Problem(
-                    detail: $"Too many requests from this client: at most {options.PermitsPerSecond} per second (bursts of {options.Burst}). Retry after {retryAfter} s.",
+                    detail: $"Too many requests from this client: at most {options.PermitsPerSecond} per second (bursts of {options.Burst}), and at most {options.ExpensivePerClient} search, catalogue range, map or batch at a time ({options.ExpensiveQueuePerClient} waiting). Retry after {retryAfter} s.",
                     statusCode: StatusCodes.Status429TooManyRequests, title: "Too many requests.",
                     type: "https://lunarshadow.invalid/problems/too-many-requests").ExecuteAsync(context.HttpContext);
             };

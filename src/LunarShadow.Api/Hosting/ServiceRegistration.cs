@@ -8,18 +8,17 @@ internal static class ServiceRegistration
 {
     public static WebApplicationBuilder AddLunarShadowServices(this WebApplicationBuilder builder)
     {
+        // One logger per host, never the static Log.Logger: hosts started side by side (the API tests run several at
+        // once) must not share, replace or freeze a global logger.
         builder.Services.AddSerilog((services, configuration) => configuration
             .ReadFrom.Configuration(builder.Configuration)
             .ReadFrom.Services(services)
-            .Enrich.FromLogContext());
+            .Enrich.FromLogContext(), preserveStaticLogger: true);
         builder.Services.AddSingleton<NodaTime.IClock>(NodaTime.SystemClock.Instance);
+        builder.Services.AddLunarShadowForwardedHeaders(builder.Configuration);
         builder.Services.AddLunarShadowRateLimiting(builder.Configuration);
+        builder.Services.AddPublicReadCors();
         builder.Services.AddHealthChecks().AddCheck<ReadinessCheck>("ephemeris", tags: ["ready"]);
-        builder.Services.AddRequestTimeouts(options => options.DefaultPolicy = new Microsoft.AspNetCore.Http.Timeouts.RequestTimeoutPolicy
-        {
-            Timeout = TimeSpan.FromSeconds(builder.Configuration.GetValue("RequestTimeoutSeconds", 30)),
-            TimeoutStatusCode = StatusCodes.Status503ServiceUnavailable,
-        });
         builder.Services.AddResponseCompression(options =>
         {
             options.EnableForHttps = true;
@@ -30,7 +29,7 @@ internal static class ServiceRegistration
         {
             options.AddBasePolicy(policy => policy.With(c => c.HttpContext.Request.Path.StartsWithSegments("/api"))
                 .SetVaryByQuery("*").SetVaryByHeader("Accept").Expire(TimeSpan.FromHours(1)));
-            options.SizeLimit = 256L * 1024 * 1024;
+            options.SizeLimit = builder.Configuration.GetValue("OutputCacheMegabytes", 128L) * 1024 * 1024;
         });
         builder.Services.AddProblemDetails();
         // Numbers are written and read as JSON numbers only, so the OpenAPI schema shows them as such.

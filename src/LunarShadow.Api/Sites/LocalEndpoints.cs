@@ -82,7 +82,12 @@ internal static class LocalEndpoints
         if (body.Sites is null && reader.IsValid) reader.Fail(BatchBody.SitesName, "sites must hold at least one site.");
         if (EclipseLookup.Resolve(f, query, BatchFormats, out var eclipse) is { } problem) return problem;
 
-        var rows = body.Sites!.Select(s => Describe(eclipse, s, query.Time, out _, out _)).ToList();
+        var aborted = request.HttpContext.RequestAborted;
+        var rows = body.Sites!.Select(s =>
+        {
+            aborted.ThrowIfCancellationRequested(); // stop at the deadline or when the client goes away, per site
+            return Describe(eclipse, s, query.Time, out _, out _);
+        }).ToList();
         return query.Output == OutputFormat.Csv
             ? Results.Text(LocalFormats.BatchCsv(rows), ContentNegotiation.MediaType(OutputFormat.Csv))
                 .AsAttachment(Downloads.FileName(OutputFormat.Csv, "lunar-eclipse", rows.Count > 0 ? rows[0].Eclipse.Date : null, "sites"))

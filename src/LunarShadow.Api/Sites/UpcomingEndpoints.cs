@@ -66,13 +66,8 @@ internal static class UpcomingEndpoints
         var criteria = new UpcomingCriteria(Enum.GetValues<EclipsePhase>().First(p => WireNames.Of(p) == phaseName), nightOnly, null, site.Hours);
         var startTt = TtInstant.FromJulianDate(JulianDate.FromCalendar(start.Value.Year, start.Value.Month, start.Value.Day, start.Value.IsGregorian).Day);
         var aborted = request.HttpContext.RequestAborted;
-        var found = UpcomingEclipses.From(EclipseFinder.For(model), site.Site, time, startTt, criteria)
-            .Select(u =>
-            {
-                aborted.ThrowIfCancellationRequested(); // honours the request timeout on long searches
-                return u;
-            })
-            .Take(wanted).ToList();
+        // Stops at the request's deadline or when the client goes away (checked per eclipse scanned).
+        var found = UpcomingEclipses.From(EclipseFinder.For(model), site.Site, time, startTt, criteria, aborted).Take(wanted).ToList();
         var items = found.Select(u =>
         {
             var full = LocalMapping.ToResponse(u.Local, time, null);

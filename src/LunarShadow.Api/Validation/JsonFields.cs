@@ -21,15 +21,25 @@ internal static class JsonFields
             buffer.Write(chunk, 0, read);
             if (buffer.Length > maxBytes) return (null, true);
         }
+        var bytes = buffer.ToArray();
+        JsonDocument document;
         try
         {
-            return (JsonDocument.Parse(buffer.ToArray(), new JsonDocumentOptions { MaxDepth = maxDepth }), false);
+            document = JsonDocument.Parse(bytes, new JsonDocumentOptions { MaxDepth = maxDepth });
         }
         catch (JsonException e)
         {
-            reader.Fail("body", $"body must be a JSON object; it could not be read: {e.Message}");
+            // Not JSON, or not UTF-8: name the field where reading stopped (e.g. sites[1].name).
+            JsonText.FailUnreadable(reader, bytes, e, "a JSON object");
             return (null, false);
         }
+        // A field name that is not Unicode text (an escaped lone surrogate) cannot even be compared.
+        if (!JsonText.NamesAreText(document.RootElement, reader))
+        {
+            document.Dispose();
+            return (null, false);
+        }
+        return (document, false);
     }
 
     /// <summary>A flat JSON object body's fields; null when too large (reader still valid) or unreadable (a problem).</summary>
@@ -62,7 +72,7 @@ internal static class JsonFields
             switch (value.ValueKind)
             {
                 case JsonValueKind.Null: break;
-                case JsonValueKind.String: fields[property.Name] = value.GetString(); break;
+                case JsonValueKind.String: fields[property.Name] = JsonText.String(value, prefix + property.Name, reader); break;
                 case JsonValueKind.Number or JsonValueKind.True or JsonValueKind.False: fields[property.Name] = value.GetRawText(); break;
                 case JsonValueKind.Array when property.Name == Parameters.Horizon.Name:
                     fields[property.Name] = HorizonPairs(value, reader, prefix + property.Name);

@@ -56,13 +56,14 @@ public sealed class EclipseFinder
     /// <summary>The shadow model.</summary>
     public ShadowModel Model { get; }
 
-    /// <summary>Every eclipse whose greatest eclipse falls in [from, to), in time order.</summary>
-    public IEnumerable<LunarEclipse> Between(TtInstant from, TtInstant to)
+    /// <summary>Every eclipse whose greatest eclipse falls in [from, to), in time order; stops when cancelled.</summary>
+    public IEnumerable<LunarEclipse> Between(TtInstant from, TtInstant to, CancellationToken cancellationToken = default)
     {
         var first = MeanLunation.LastFullMoonAtOrBefore(from) - 1;
         var last = MeanLunation.LastFullMoonAtOrBefore(to) + 1;
         for (var k = first; k <= last; k++)
         {
+            cancellationToken.ThrowIfCancellationRequested();
             var eclipse = AtLunation(k);
             if (eclipse is not null && eclipse.GreatestEclipse >= from && eclipse.GreatestEclipse < to) yield return eclipse;
         }

@@ -32,12 +32,26 @@ public sealed class HorizonProfile
         if (_points.Length == 0) return Angle.Zero;
         if (_points.Length == 1) return Angle.FromDegrees(_points[0].Altitude);
         var az = azimuth.NormalizedPositive().Degrees;
-        var i = Array.FindIndex(_points, p => p.Azimuth > az);
+        var i = FirstAbove(az);
         var (a0, h0) = i <= 0 ? _points[^1] : _points[i - 1];
         var (a1, h1) = i < 0 ? _points[0] : _points[i];
         var span = ((a1 - a0) % 360 + 360) % 360;
         if (span == 0) return Angle.FromDegrees(h0);
         var along = ((az - a0) % 360 + 360) % 360;
         return Angle.FromDegrees(h0 + (h1 - h0) * along / span);
+    }
+
+    // The index of the first point east of the azimuth, or −1 if none: a binary search, O(log n) per lookup, since the
+    // horizon search asks for hundreds of azimuths per eclipse and a profile may hold 360 points.
+    private int FirstAbove(double azimuthDegrees)
+    {
+        int low = 0, high = _points.Length;
+        while (low < high)
+        {
+            var middle = (low + high) >> 1;
+            if (_points[middle].Azimuth > azimuthDegrees) high = middle;
+            else low = middle + 1;
+        }
+        return low == _points.Length ? -1 : low;
     }
 }

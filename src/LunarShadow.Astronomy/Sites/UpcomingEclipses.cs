@@ -32,13 +32,15 @@ public static class UpcomingEclipses
 
     private static readonly Angle AstronomicalNightSun = Angle.FromDegrees(-18);
 
-    /// <summary>Eclipses from <paramref name="from"/> on that the site can see, lazily, in time order.</summary>
-    public static IEnumerable<UpcomingEclipse> From(EclipseFinder finder, Site site, TimeScaleConverter time, TtInstant from, UpcomingCriteria criteria)
+    /// <summary>Eclipses from <paramref name="from"/> on that the site can see, lazily, in time order; stops when cancelled.</summary>
+    public static IEnumerable<UpcomingEclipse> From(EclipseFinder finder, Site site, TimeScaleConverter time, TtInstant from, UpcomingCriteria criteria,
+        CancellationToken cancellationToken = default)
     {
         var effectiveSite = criteria.MinimumMoonAltitude is { } min && min > site.MinimumAltitude ? site with { MinimumAltitude = min } : site;
         var end = TtInstant.FromJulianDate(Math.Min(from.JulianDate.Day + MaxYearsAhead * 365.25, SupportedRange.End.Day - 1));
-        foreach (var eclipse in finder.Between(from, end))
+        foreach (var eclipse in finder.Between(from, end, cancellationToken))
         {
+            cancellationToken.ThrowIfCancellationRequested();
             var local = LocalCircumstancesCalculator.Compute(eclipse, effectiveSite, time);
             var spans = local.VisiblePhases.Where(p => p.Phase == criteria.MinimumPhase).ToList();
             if (spans.Count == 0) continue;

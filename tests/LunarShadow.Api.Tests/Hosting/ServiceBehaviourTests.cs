@@ -3,6 +3,7 @@ using System.Net.Http.Headers;
 using LunarShadow.Api.Tests.Support;
 using Microsoft.AspNetCore.Hosting;
 using Microsoft.AspNetCore.Mvc.Testing;
+using Microsoft.Extensions.DependencyInjection;
 
 namespace LunarShadow.Api.Tests.Hosting;
 
@@ -65,6 +66,7 @@ public class ServiceBehaviourTests(ApiFactory factory) : IClassFixture<ApiFactor
         var request = new HttpRequestMessage(HttpMethod.Get, "/api/v1/eclipses?from=2000-01-01&to=2030-12-31");
         request.Headers.AcceptEncoding.Add(new StringWithQualityHeaderValue("gzip"));
         var response = await _client.SendAsync(request);
+        Assert.Equal(HttpStatusCode.OK, response.StatusCode);
         Assert.Contains("gzip", response.Content.Headers.ContentEncoding);
     }
 }
@@ -79,6 +81,7 @@ public class RateLimitTests
         {
             b.UseSetting("RateLimiting:PermitsPerSecond", "1");
             b.UseSetting("RateLimiting:Burst", "3");
+            b.UseSetting("RateLimiting:ReplenishmentSeconds", "3600"); // no refill during the test
         });
         var client = factory.CreateClient();
         var statuses = new List<HttpStatusCode>();
@@ -94,5 +97,39 @@ public class RateLimitTests
         Assert.True(limited!.Headers.RetryAfter is not null);
         Assert.Equal("application/problem+json", limited.Content.Headers.ContentType?.MediaType);
         Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/health/live")).StatusCode); // health is never limited
+    }
+}
+
+/// <summary>Readiness covers what the service serves: the ephemeris and the page's files.</summary>
+public class ReadinessTests
+{
+    private sealed class EmptyWebRoot(string path) : Microsoft.AspNetCore.Hosting.IStartupFilter
+    {
+        public Action<Microsoft.AspNetCore.Builder.IApplicationBuilder> Configure(Action<Microsoft.AspNetCore.Builder.IApplicationBuilder> next) => app =>
+        {
+            var environment = app.ApplicationServices.GetRequiredService<IWebHostEnvironment>();
+            environment.WebRootPath = path;
+            environment.WebRootFileProvider = new Microsoft.Extensions.FileProviders.PhysicalFileProvider(path);
+            next(app);
+        };
+    }
+
+    [Fact]
+    public async Task Readiness_fails_when_the_page_files_are_missing_while_liveness_holds()
+    {
+        var empty = Directory.CreateTempSubdirectory("lunarshadow-no-wwwroot-");
+        try
+        {
+            // The page's files gone from the web root, as in an image built without them.
+            await using var factory = new WebApplicationFactory<Program>().WithWebHostBuilder(b =>
+                b.ConfigureServices(s => s.AddSingleton<Microsoft.AspNetCore.Hosting.IStartupFilter>(new EmptyWebRoot(empty.FullName))));
+            var client = factory.CreateClient();
+            Assert.Equal(HttpStatusCode.ServiceUnavailable, (await client.GetAsync("/health/ready")).StatusCode);
+            Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/health/live")).StatusCode);
+        }
+        finally
+        {
+            empty.Delete(recursive: true);
+        }
     }
 }

@@ -1,0 +1,59 @@
+using System.Net;
+using Microsoft.AspNetCore.Hosting;
+using Microsoft.AspNetCore.Mvc.Testing;
+
+namespace LunarShadow.Api.Tests.Hosting;
+
+/// <summary>What one client can cost the service is bounded, not only how often it may ask.</summary>
+public class CostLimitTests
+{
+    // A search nothing satisfies, on a finder no other test warms (its own layer height): seconds of work.
+    private static string Hopeless(string layerKm) => $"/api/v1/sites/upcoming?lat=89.9&lon=0&from=-1999-01-01&phase=total&night=true&count=50&shadow=layer&layerKm={layerKm}";
+
+    [Fact]
+    public async Task A_client_runs_one_expensive_request_at_a_time_while_its_cheap_requests_still_get_through()
+    {
+        await using var factory = new WebApplicationFactory<Program>().WithWebHostBuilder(b =>
+        {
+            b.UseSetting("RateLimiting:PermitsPerSecond", "1000");
+            b.UseSetting("RateLimiting:Burst", "1000");
+            b.UseSetting("RateLimiting:ExpensivePerClient", "1");
+            b.UseSetting("RateLimiting:ExpensiveQueuePerClient", "0");
+            b.UseSetting("RequestTimeoutSeconds", "15");
+        });
+        var client = factory.CreateClient();
+        Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/api/v1/eclipses/2025-03-14")).StatusCode); // host started
+        var first = client.GetAsync(Hopeless("234.5"));
+        await Task.Delay(500);
+        var second = client.GetAsync(Hopeless("234.6"));
+        // While one search runs, the same client's cheap requests still get through.
+        Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/api/v1/eclipses/2025-03-14/local?lat=47.07&lon=15.44")).StatusCode);
+        var statuses = new[] { (await first).StatusCode, (await second).StatusCode };
+        // One was refused at once with 429; the other ran (to its end, or to its 15 s deadline on a slow machine).
+        Assert.Single(statuses, HttpStatusCode.TooManyRequests);
+        Assert.Single(statuses, s => s is HttpStatusCode.OK or HttpStatusCode.ServiceUnavailable);
+    }
+
+    [Fact]
+    public async Task The_OpenAPI_document_is_built_once_and_counts_against_the_rate_limit()
+    {
+        await using var factory = new WebApplicationFactory<Program>().WithWebHostBuilder(b =>
+        {
+            b.UseSetting("RateLimiting:PermitsPerSecond", "1");
+            b.UseSetting("RateLimiting:Burst", "2");
+            b.UseSetting("RateLimiting:ReplenishmentSeconds", "3600"); // no refill during the test
+        });
+        var client = factory.CreateClient();
+        var first = await client.GetAsync("/openapi/v1.json");
+        var second = await client.GetAsync("/openapi/v1.json");
+        Assert.Equal(HttpStatusCode.OK, first.StatusCode);
+        Assert.Equal(HttpStatusCode.OK, second.StatusCode);
+        Assert.Equal(await first.Content.ReadAsStringAsync(), await second.Content.ReadAsStringAsync());
+        // RFC 9111 §5.1: Age is sent by a cache; the output cache sends it when it answers from what it stored.
+        Assert.NotNull(second.Headers.Age);
+        // A burst of 2 with one token a second: quick repeats of the (now cached) document run out.
+        var statuses = new List<HttpStatusCode>();
+        for (var i = 0; i < 6; i++) statuses.Add((await client.GetAsync("/openapi/v1.json")).StatusCode);
+        Assert.Contains(HttpStatusCode.TooManyRequests, statuses);
+    }
+}
