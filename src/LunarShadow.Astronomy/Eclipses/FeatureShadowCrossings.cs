@@ -18,8 +18,11 @@ public sealed class FeatureShadowCrossings
     private const double ToleranceHours = 1e-6;
 
     // Sampling step of the search, hours: the distance from the edge is smooth (nearly a parabola in time), so a step of
-    // 5 minutes brackets every crossing; a graze between samples is caught by refining the least distance.
-    private const double StepHours = 5.0 / 60;
+    // 10 minutes brackets every crossing; a graze between samples is caught by refining the least distance.
+    private const double StepHours = 10.0 / 60;
+
+    // The largest amount by which the distance from the edge can fall between two samples: 0.6″/s over half a step, with margin.
+    private static readonly double MaxDipRadians = Angle.FromArcseconds(0.6 * StepHours * 3600 / 2 * 1.5).Radians;
 
     private static readonly double MoonRadiusKm = BodyDisc.MoonRadiusRatio * GeodeticLocation.EquatorialRadiusKm;
 
@@ -42,33 +45,65 @@ public sealed class FeatureShadowCrossings
     public LunarEclipse Eclipse => _eclipse;
 
     /// <summary>The timings of each feature, in the given order.</summary>
-    public IReadOnlyList<FeatureTiming> Compute(IEnumerable<LunarFeature> features) => features.Select(Timing).ToList();
+    public IReadOnlyList<FeatureTiming> Compute(IEnumerable<LunarFeature> features)
+    {
+        // The feature can be in the penumbra only between P1 and P4 (give or take the 3-D sphere); search a margin beyond.
+        var passage = _eclipse.Passage;
+        var first = _eclipse.Contact(ContactName.P1) is { } p1 ? passage.HoursFromCenter(p1.Tt) : -passage.HalfWidthHours;
+        var last = _eclipse.Contact(ContactName.P4) is { } p4 ? passage.HoursFromCenter(p4.Tt) : passage.HalfWidthHours;
+        var from = Math.Max(-passage.HalfWidthHours, first - 0.1);
+        var to = Math.Min(passage.HalfWidthHours, last + 0.1);
+        var count = Math.Max(2, (int)Math.Ceiling((to - from) / StepHours));
+        var hours = Enumerable.Range(0, count + 1).Select(i => from + (to - from) * i / count).ToArray();
+        var frames = hours.Select(FrameAt).ToArray();
+        return features.Select(f => Timing(f, hours, frames)).ToList();
+    }
 
     /// <summary>A feature relative to the shadow at some hours from the passage's centre.</summary>
     /// <returns>
     /// The feature's geometry about the axis (its gnomonic offsets and its distance along the axis in place of the Moon's),
     /// its position angle on the disc seen from the Earth's centre, and whether it faces the Earth.
     /// </returns>
-    public (ShadowGeometry Geometry, Angle PositionAngle, bool FacesEarth) At(LunarFeature feature, double hours)
+    public (ShadowGeometry Geometry, Angle PositionAngle, bool FacesEarth) At(LunarFeature feature, double hours) => At(feature, FrameAt(hours));
+
+    /// <summary>How far a feature lies outside a shadow's edge (negative inside), radians, at some hours from the centre.</summary>
+    public double DistanceOutside(LunarFeature feature, double hours, bool umbra) => DistanceOutside(feature, FrameAt(hours), umbra);
+
+    // Everything about one instant that does not depend on the feature: the Moon, the axis frame, the Moon's orientation.
+    private readonly record struct Frame(ShadowGeometry Moon, CartesianVector MoonKm, CartesianVector Axis, CartesianVector East, CartesianVector North, RotationMatrix ToDate);
+
+    private Frame FrameAt(double hours)
     {
         var passage = _eclipse.Passage;
         var g = passage.At(hours);
         var moon = passage.MoonDirectionOfDate(hours) * g.MoonDistanceKm;
         var (axis, east, north) = AxisFrame(g, moon);
         var orientation = MoonOrientation.At(passage.InstantAt(hours), _nutation, _meanObliquity);
-        var offset = orientation.ToTrueEquatorOfDate * feature.Location.ToVector(MoonRadiusKm);
-        var position = moon + offset;
-        var along = position.Dot(axis);
-        var geometry = new ShadowGeometry(position.Dot(east) / along, position.Dot(north) / along, along, g.SunDistanceKm, g.AxisDeclinationRadians);
-        return (geometry, MoonOrientation.PositionAngle(offset, moon), offset.Dot(moon) < 0);
+        return new Frame(g, moon, axis, east, north, orientation.ToTrueEquatorOfDate);
     }
 
-    /// <summary>How far a feature lies outside a shadow's edge (negative inside), radians, at some hours from the centre.</summary>
-    public double DistanceOutside(LunarFeature feature, double hours, bool umbra)
+    private static (ShadowGeometry Geometry, Angle PositionAngle, bool FacesEarth) At(LunarFeature feature, in Frame frame)
     {
-        var geometry = At(feature, hours).Geometry;
+        var offset = frame.ToDate * feature.Location.ToVector(MoonRadiusKm);
+        var position = frame.MoonKm + offset;
+        var along = position.Dot(frame.Axis);
+        var geometry = new ShadowGeometry(position.Dot(frame.East) / along, position.Dot(frame.North) / along, along,
+            frame.Moon.SunDistanceKm, frame.Moon.AxisDeclinationRadians);
+        return (geometry, MoonOrientation.PositionAngle(offset, frame.MoonKm), offset.Dot(frame.MoonKm) < 0);
+    }
+
+    private (double Umbra, double Penumbra) Gaps(LunarFeature feature, in Frame frame)
+    {
+        var geometry = At(feature, frame).Geometry;
         var radii = ShadowCrossSection.Radii(_eclipse.Model, geometry, geometry.DirectionFromAxis);
-        return geometry.Separation.Radians - (umbra ? radii.Umbra : radii.Penumbra).Radians;
+        var separation = geometry.Separation.Radians;
+        return (separation - radii.Umbra.Radians, separation - radii.Penumbra.Radians);
+    }
+
+    private double DistanceOutside(LunarFeature feature, in Frame frame, bool umbra)
+    {
+        var (u, p) = Gaps(feature, frame);
+        return umbra ? u : p;
     }
 
     // The shadow axis and the east and north directions about it, recovered from the passage: the Moon's centre lies at
@@ -84,29 +119,12 @@ public sealed class FeatureShadowCrossings
             new CartesianVector(-sinDec * cosRa, -sinDec * sinRa, cosDec));
     }
 
-    private FeatureTiming Timing(LunarFeature feature)
+    private FeatureTiming Timing(LunarFeature feature, double[] hours, Frame[] frames)
     {
-        // The feature can be in the penumbra only between P1 and P4 (give or take the 3-D sphere); search a margin beyond.
-        var passage = _eclipse.Passage;
-        var first = _eclipse.Contact(ContactName.P1) is { } p1 ? passage.HoursFromCenter(p1.Tt) : -passage.HalfWidthHours;
-        var last = _eclipse.Contact(ContactName.P4) is { } p4 ? passage.HoursFromCenter(p4.Tt) : passage.HalfWidthHours;
-        var from = Math.Max(-passage.HalfWidthHours, first - 0.1);
-        var to = Math.Min(passage.HalfWidthHours, last + 0.1);
-
         // One sampling serves both edges.
-        var count = Math.Max(2, (int)Math.Ceiling((to - from) / StepHours));
-        var step = (to - from) / count;
-        var hours = new double[count + 1];
-        var umbraGaps = new double[count + 1];
-        var penumbraGaps = new double[count + 1];
-        for (var i = 0; i <= count; i++)
-        {
-            hours[i] = from + i * step;
-            var geometry = At(feature, hours[i]).Geometry;
-            var radii = ShadowCrossSection.Radii(_eclipse.Model, geometry, geometry.DirectionFromAxis);
-            umbraGaps[i] = geometry.Separation.Radians - radii.Umbra.Radians;
-            penumbraGaps[i] = geometry.Separation.Radians - radii.Penumbra.Radians;
-        }
+        var umbraGaps = new double[hours.Length];
+        var penumbraGaps = new double[hours.Length];
+        for (var i = 0; i < hours.Length; i++) (umbraGaps[i], penumbraGaps[i]) = Gaps(feature, frames[i]);
         var (umbraIn, umbraOut) = Crossings(feature, hours, umbraGaps, umbra: true);
         var (penumbraIn, penumbraOut) = Crossings(feature, hours, penumbraGaps, umbra: false);
         return new FeatureTiming(feature, umbraIn, umbraOut, penumbraIn, penumbraOut);
@@ -116,15 +134,30 @@ public sealed class FeatureShadowCrossings
     {
         double Gap(double h) => DistanceOutside(feature, h, umbra);
         var last = hours.Length - 1;
-        // The gap falls to one least value and rises again: bracket its least value, refine it, and find the two
-        // crossings either side when it is negative.
-        var least = Array.IndexOf(gaps, gaps.Min());
-        var deepest = gaps[least] < 0 ? hours[least]
-            : RootFinder.Minimum(Gap, hours[Math.Max(0, least - 1)], hours[Math.Min(last, least + 1)], ToleranceHours);
-        if (Gap(deepest) >= 0) return (null, null);
         if (gaps[0] <= 0 || gaps[last] <= 0) return (null, null); // inside at the ends of the window: cannot happen between P1 and P4
-        var start = RootFinder.Brent(Gap, hours[0], deepest, ToleranceHours);
-        var end = RootFinder.Brent(Gap, deepest, hours[last], ToleranceHours);
+        // The gap falls to one least value and rises again. Between samples it can dip below the sampled values by at
+        // most the Moon's motion over half a step (under 0.6″/s); a least sample further out than that means no crossing.
+        var least = Array.IndexOf(gaps, gaps.Min());
+        if (gaps[least] > MaxDipRadians) return (null, null);
+        double start, end;
+        if (gaps[least] < 0)
+        {
+            var before = least;
+            while (gaps[before] < 0) before--;
+            var after = least;
+            while (gaps[after] < 0) after++;
+            start = RootFinder.Brent(Gap, hours[before], hours[before + 1], ToleranceHours);
+            end = RootFinder.Brent(Gap, hours[after - 1], hours[after], ToleranceHours);
+        }
+        else
+        {
+            // A graze between samples: find the least distance, and the crossings either side of it.
+            var (lo, hi) = (hours[Math.Max(0, least - 1)], hours[Math.Min(last, least + 1)]);
+            var deepest = RootFinder.Minimum(Gap, lo, hi, ToleranceHours);
+            if (Gap(deepest) >= 0) return (null, null);
+            start = RootFinder.Brent(Gap, lo, deepest, ToleranceHours);
+            end = RootFinder.Brent(Gap, deepest, hi, ToleranceHours);
+        }
         return (Crossing(feature, start), Crossing(feature, end));
     }
 
