@@ -96,7 +96,7 @@ internal static class LocalMapping
         _ => "hidden-by-horizon-profile",
     };
 
-    private static string SkyName(SkyState sky) => sky switch
+    internal static string SkyName(SkyState sky) => sky switch
     {
         SkyState.Day => "day",
         SkyState.CivilTwilight => "civil-twilight",
