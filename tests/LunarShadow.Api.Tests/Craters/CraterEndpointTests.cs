@@ -189,4 +189,62 @@ public class CraterEndpointTests(ApiFactory factory, ITestOutputHelper output) :
         var response = await _client.GetAsync("/api/v1/eclipses/2025-03-15/craters");
         Assert.Equal(HttpStatusCode.NotFound, response.StatusCode);
     }
+
+    // Walk the space: /craters answers for every eclipse with an umbral phase in 2000–2100 and in two-year windows every
+    // 500 years over −1999…+3000, under every shadow model, with the invariants of the answer (common practice: a
+    // crossing lies between U1 and U4, immersion before emersion, total eclipses reach every feature facing the Earth).
+    [Fact]
+    public async Task Craters_answer_for_every_umbral_eclipse_under_every_shadow_model()
+    {
+        var windows = new List<(string From, string To)> { ("2000-01-01", "2100-12-31") };
+        for (var year = -1999; year <= 2999; year += 500) windows.Add((Year(year) + "-01-01", Year(year + 1) + "-12-31"));
+        var cases = 0;
+        var crossings = 0;
+        foreach (var shadow in new[] { "danjon", "chauvenet", "none", "layer&layerKm=60" })
+        {
+            foreach (var (from, to) in windows)
+            {
+                var list = await Get($"?from={from}&to={to}&kind=partial,total&shadow={shadow}");
+                foreach (var e in list.GetProperty("eclipses").EnumerateArray())
+                {
+                    var date = e.GetProperty("date").GetString();
+                    var contacts = e.GetProperty("contacts").EnumerateArray().ToDictionary(c => c.GetProperty("name").GetString()!, c => Seconds(c));
+                    var json = await Get($"{date}/craters?shadow={shadow}");
+                    cases++;
+                    Assert.Equal(shadow.Split('&')[0], json.GetProperty("shadowModel").GetString());
+                    foreach (var f in json.GetProperty("features").EnumerateArray().Where(f => f.GetProperty("reachedByUmbra").GetBoolean()))
+                    {
+                        var (a, b) = (Seconds(f.GetProperty("immersion")), Seconds(f.GetProperty("emersion")));
+                        Assert.True(a < b);
+                        Assert.True(a >= contacts["U1"] - 1 && b <= contacts["U4"] + 1, $"{shadow} {date} {f.GetProperty("name")}");
+                        crossings += 2;
+                    }
+                    if (e.GetProperty("kind").GetString() == "total")
+                        Assert.Contains(json.GetProperty("features").EnumerateArray(), f => f.GetProperty("reachedByUmbra").GetBoolean());
+                    if (cases % 7 == 0)
+                    {
+                        var csv = await _client.GetStringAsync($"/api/v1/eclipses/{date}/craters?shadow={shadow}&format=csv");
+                        Assert.Equal(json.GetProperty("features").GetArrayLength() + 1, csv.Split("\r\n", StringSplitOptions.RemoveEmptyEntries).Length);
+                    }
+                }
+            }
+        }
+        output.WriteLine($"{cases} eclipse × model answers, {crossings} umbral crossings checked");
+        Assert.True(cases > 500);
+    }
+
+    // An ordering key in seconds for ISO instants of any year (negative years too); exact within a month, which is all
+    // an eclipse night needs.
+    private static double Seconds(JsonElement instant)
+    {
+        var text = instant.GetProperty("utc").GetString()!;
+        var negative = text.StartsWith('-');
+        var parts = text.TrimStart('-').TrimEnd('Z').Split('-', 'T', ':');
+        var year = int.Parse(parts[0], CultureInfo.InvariantCulture) * (negative ? -1 : 1);
+        return ((year * 13.0 + int.Parse(parts[1], CultureInfo.InvariantCulture)) * 32 + int.Parse(parts[2], CultureInfo.InvariantCulture)) * 86400
+            + int.Parse(parts[3], CultureInfo.InvariantCulture) * 3600 + int.Parse(parts[4], CultureInfo.InvariantCulture) * 60
+            + double.Parse(parts[5], CultureInfo.InvariantCulture);
+    }
+
+    private static string Year(int year) => year < 0 ? "-" + (-year).ToString("0000", CultureInfo.InvariantCulture) : year.ToString("0000", CultureInfo.InvariantCulture);
 }
