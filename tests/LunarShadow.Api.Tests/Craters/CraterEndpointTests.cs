@@ -6,6 +6,9 @@ using Xunit.Abstractions;
 
 namespace LunarShadow.Api.Tests.Craters;
 
+// One collection with the ephemeris tests: their hosts then start one after the other (two hosts starting at once can
+// trip the shared bootstrap logger, a known issue of the host set-up).
+[Collection("Ephemeris and craters")]
 public class CraterEndpointTests(ApiFactory factory, ITestOutputHelper output) : IClassFixture<ApiFactory>
 {
     private readonly HttpClient _client = factory.CreateClient();

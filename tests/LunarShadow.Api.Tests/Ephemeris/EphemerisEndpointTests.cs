@@ -3,6 +3,7 @@ using LunarShadow.Api.Tests.Support;
 
 namespace LunarShadow.Api.Tests.Ephemeris;
 
+[Collection("Ephemeris and craters")]
 public class EphemerisEndpointTests(ApiFactory factory) : IClassFixture<ApiFactory>
 {
     private readonly HttpClient _client = factory.CreateClient();
