@@ -1,4 +1,4 @@
-using System.ComponentModel;
+using LunarShadow.Api.Common;
 using LunarShadow.Api.Eclipses;
 using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Validation;
@@ -13,50 +13,48 @@ internal static class CraterEndpoints
     /// <summary>Most features in one iCalendar download (an event per crossing of every feature would be too many).</summary>
     public const int MaxCalendarFeatures = 10;
 
-    private static readonly OutputFormat[] Formats = [OutputFormat.Json, OutputFormat.Csv, OutputFormat.Calendar];
+    private static readonly FormatOffer Formats = new(OutputFormat.Json, OutputFormat.Csv, OutputFormat.Calendar);
+
+    public static readonly Parameter Features = new("features", ParameterType.Text,
+        "Comma-separated feature names to keep (e.g. Tycho,Plato); default: all. Required for format=ics, at most 10 then.")
+    {
+        MaxLength = 2000,
+    };
+
+    public static readonly Parameter Penumbra = new("penumbra", ParameterType.Boolean, "true adds the crossings of the penumbra's outer edge.")
+    {
+        Default = false,
+    };
 
     public static IEndpointRouteBuilder MapCraterEndpoints(this IEndpointRouteBuilder routes)
     {
         routes.MapGet("/api/v1/eclipses/{date}/craters", Get)
             .WithName("GetCraterTimings")
             .WithTags("Eclipses")
+            .Takes(new EndpointParameters([Parameters.EclipseDate, Features, Penumbra, .. Parameters.Site, .. Parameters.Model, Formats.Parameter]))
             .WithSummary("When the umbra's edge crosses named features on the Moon")
             .WithDescription("For about fifty features that observers time (coordinates from the IAU/USGS Gazetteer of Planetary Nomenclature), the instants the umbra's edge reaches them (immersion) and leaves them (emersion), under the chosen shadow model evaluated at each feature's own distance along the shadow, in UTC and TT with ΔT's uncertainty, with the feature's position angle on the disc; in the order the umbra reaches them, features it never reaches last. A crossing is the same instant for every observer: a site (lat, lon, tz) adds only whether the Moon is up and the sky state. penumbra=true adds the penumbra's crossings. JSON, CSV, or iCalendar for a few features (features=Tycho,Plato).")
             .Produces<CraterTimingsResponse>(StatusCodes.Status200OK, "application/json", "text/csv", "text/calendar")
-            .ProducesValidationProblem()
-            .ProducesProblem(StatusCodes.Status404NotFound)
-            .ProducesProblem(StatusCodes.Status406NotAcceptable);
+            .ProducesEclipseProblems();
         return routes;
     }
 
-    internal static IResult Get(
-        HttpRequest request,
-        [Description("UTC date of greatest eclipse, YYYY-MM-DD (Julian calendar before 1582-10-15).")] string date,
-        [Description("Comma-separated feature names to keep (e.g. Tycho,Plato); default: all. Required for format=ics, at most 10 then.")] string? features,
-        [Description("true adds the crossings of the penumbra's outer edge (default false).")] string? penumbra,
-        [Description(SiteQuery.LatitudeDescription + " Give with lon to add visibility from a site.")] string? lat,
-        [Description(SiteQuery.LongitudeDescription)] string? lon,
-        [Description(SiteQuery.ElevationDescription)] string? elevation,
-        [Description(SiteQuery.TimeZoneDescription)] string? tz,
-        [Description(SiteQuery.MinAltitudeDescription)] string? minAltitude,
-        [Description(SiteQuery.HorizonDescription)] string? horizon,
-        [Description(SiteQuery.NameDescription)] string? name,
-        [AsParameters] ModelParameters computation,
-        [Description("Response format: json (default), csv or ics; overrides the Accept header.")] string? format)
+    internal static IResult Get(HttpRequest request)
     {
-        var reader = new QueryReader();
-        var day = reader.Date("date", date);
-        var chosen = ReadFeatures(reader, features);
-        var withPenumbra = reader.OneOf("penumbra", penumbra, ["true", "false"]) == "true";
-        var site = SiteQuery.Read(reader, new SiteFields(lat, lon, elevation, tz, minAltitude, horizon, Name: name), required: false);
-        var (model, time) = computation.Read(reader);
-        var output = ContentNegotiation.Choose(request, format, Formats, reader);
+        var f = RequestFields.FromQuery(request, new QueryReader());
+        var reader = f.Reader;
+        var query = EclipseLookup.Read(request, f, Formats);
+        var chosen = ReadFeatures(reader, f.Raw(Features));
+        var withPenumbra = f.Boolean(Penumbra);
+        var site = SiteParameters.ReadSite(f, required: false);
+        var output = query.Output;
         if (output == OutputFormat.Calendar && reader.IsValid)
         {
             if (chosen is null) reader.Fail("features", $"An iCalendar download needs features=Name,Name (1 to {MaxCalendarFeatures} features), e.g. features=Tycho,Plato.");
             else if (chosen.Count > MaxCalendarFeatures) reader.Fail("features", $"An iCalendar download takes at most {MaxCalendarFeatures} features; got {chosen.Count}.");
         }
-        if (EclipseLookup.Resolve(reader, day, date, output, Formats, model, time, out var eclipse) is { } problem) return problem;
+        if (EclipseLookup.Resolve(f, query, Formats, out var eclipse) is { } problem) return problem;
+        var time = query.Time;
 
         var list = chosen ?? LunarFeatureCatalog.All;
         var timings = new FeatureShadowCrossings(eclipse).Compute(list);

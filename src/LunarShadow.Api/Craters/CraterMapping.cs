@@ -1,6 +1,5 @@
-using LunarShadow.Api.Eclipses;
 using LunarShadow.Api.Formatting;
-using LunarShadow.Api.Sites;
+using LunarShadow.Api.Common;
 using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Embedded;
 using LunarShadow.Astronomy.Shadow;
@@ -39,7 +38,7 @@ internal static class CraterMapping
                 Local = TimeFormats.Local(utc, site.TimeZone).Text,
                 Visible = visible,
                 MoonAltitudeDegrees = TimeFormats.Round(moon.ApparentAltitude.Degrees, 2),
-                Sky = LocalMapping.SkyName(SkyStates.FromSunAltitude(sky.SunAltitudeAt(h))),
+                Sky = WireNames.Of(SkyStates.FromSunAltitude(sky.SunAltitudeAt(h))),
                 ZenithPositionAngleDegrees = TimeFormats.Round((c.PositionAngle - moon.ParallacticAngle).NormalizedPositive().Degrees, 1),
             };
         }
@@ -54,7 +53,7 @@ internal static class CraterMapping
 
         return new CraterTimingsResponse(
             TimeFormats.UtcDate(time.ToUtc(eclipse.GreatestEclipse)),
-            EclipseMapping.KindName(eclipse.Kind),
+            WireNames.Of(eclipse.Kind),
             eclipse.Model.Name,
             eclipse.Model.Kind == ShadowModelKind.Layer ? eclipse.Model.LayerHeightKm : null,
             time.DeltaTModel.Name,
