@@ -15,10 +15,10 @@ internal static class CraterEndpoints
 
     private static readonly FormatOffer Formats = new(OutputFormat.Json, OutputFormat.Csv, OutputFormat.Calendar);
 
-    public static readonly Parameter Features = new("features", ParameterType.Text,
+    public static readonly Parameter Features = new("features", ParameterType.ChoiceList,
         "Comma-separated feature names to keep (e.g. Tycho,Plato); default: all. Required for format=ics, at most 10 then.")
     {
-        MaxLength = 2000,
+        Allowed = LunarFeatureCatalog.All.Select(f => f.Name).ToList(),
     };
 
     public static readonly Parameter Penumbra = new("penumbra", ParameterType.Boolean, "true adds the crossings of the penumbra's outer edge.")
