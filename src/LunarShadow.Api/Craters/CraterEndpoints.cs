@@ -1,5 +1,4 @@
 using LunarShadow.Api.Common;
-using LunarShadow.Api.Eclipses;
 using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Eclipses;

@@ -1,5 +1,4 @@
 using LunarShadow.Astronomy.Frames;
-using LunarShadow.Astronomy.Tests.Support;
 using LunarShadow.Astronomy.Time;
 using LunarShadow.Astronomy.Units;
 
