@@ -4,6 +4,7 @@ using LunarShadow.Astronomy.Embedded;
 using LunarShadow.Astronomy.Ephemeris;
 using LunarShadow.Astronomy.Frames;
 using LunarShadow.Astronomy.Time;
+using LunarShadow.Astronomy.Units;
 using Microsoft.AspNetCore.Http.HttpResults;
 
 namespace LunarShadow.Api.Ephemeris;
@@ -18,7 +19,7 @@ internal static class EphemerisEndpoints
             .Takes(Takes)
             .WithTags("Ephemeris")
             .WithSummary("Apparent places of the Moon and Sun at one instant")
-            .WithDescription("Geocentric apparent right ascension, declination and distance of date (ELP/MPP02, VSOP87, Vondrák 2011 precession, IAU 2000B nutation, light time and aberration), semi-diameters and parallaxes; with a site, topocentric places with refraction.");
+            .WithDescription("Geocentric apparent right ascension, declination and distance of date (ELP/MPP02, VSOP87, Vondrák 2011 precession, IAU 2000B nutation, light time and aberration), semi-diameters and parallaxes, and for the Moon its libration, the position angle of its axis and the sub-solar point (Meeus 1998, ch. 53); with a site, topocentric places with refraction, topocentric libration and axis.");
         return routes;
     }
 
@@ -48,6 +49,23 @@ internal static class EphemerisEndpoints
         TopocentricPlace? Topocentric(ApparentPlace body) =>
             site is not null ? ApparentPlaceCalculator.Topocentric(body, sky.GreenwichApparentSiderealTime, site.Location, site.Air) : null;
 
+        var moon = Body(sky.Moon, Topocentric(sky.Moon), isSun: false);
+        var orientation = MoonOrientation.At(tt, sky.Nutation, sky.MeanObliquity);
+        var geocentric = MoonPhysicalEphemeris.Compute(orientation, sky.Moon.TrueEquatorialKm, sky.Moon.TrueEquatorialKm, sky.Sun.TrueEquatorialKm);
+        moon = moon with
+        {
+            Libration = Point(geocentric.Libration),
+            AxisPositionAngleDegrees = TimeFormats.Round(geocentric.AxisPositionAngle.Degrees, 4),
+            SubSolarPoint = Point(geocentric.SubSolarPoint),
+        };
+        if (site is not null && moon.Topocentric is { } seen)
+        {
+            // Seen from the site: the line of sight from the observer (true equator of date) replaces the geocentric one.
+            var siteTrueOfDate = RotationMatrix.AboutZ(-sky.GreenwichApparentSiderealTime.Radians) * site.Location.EarthFixedKm();
+            var fromSite = MoonPhysicalEphemeris.Compute(orientation, sky.Moon.TrueEquatorialKm - siteTrueOfDate, sky.Moon.TrueEquatorialKm, sky.Sun.TrueEquatorialKm);
+            moon = moon with { Topocentric = seen with { Libration = Point(fromSite.Libration), AxisPositionAngleDegrees = TimeFormats.Round(fromSite.AxisPositionAngle.Degrees, 4) } };
+        }
+
         return TypedResults.Ok(new EphemerisResponse(
             TimeFormats.Utc(instant.Value),
             TimeFormats.Tt(tt),
@@ -56,10 +74,13 @@ internal static class EphemerisEndpoints
             TimeFormats.Round(deltaTValue.UncertaintySeconds, 3),
             deltaTValue.Model,
             "apparent place: true equator and equinox of date, geocentric unless under topocentric",
-            Body(sky.Moon, Topocentric(sky.Moon), isSun: false),
+            moon,
             Body(sky.Sun, Topocentric(sky.Sun), isSun: true),
             EmbeddedDataSet.VersionTag));
     }
+
+    private static LibrationResponse Point(SelenographicPoint point) =>
+        new(TimeFormats.Round(point.Longitude.Degrees, 4), TimeFormats.Round(point.Latitude.Degrees, 4));
 
     private static BodyPlace Body(ApparentPlace place, TopocentricPlace? topocentric, bool isSun) => new(
         TimeFormats.Round(place.RightAscension.Hours, 7),

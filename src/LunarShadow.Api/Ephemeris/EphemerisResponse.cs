@@ -33,6 +33,9 @@ public sealed record EphemerisResponse(
 /// <param name="SemiDiameterArcsec">Geocentric semi-diameter, arc-seconds.</param>
 /// <param name="HorizontalParallaxArcsec">Equatorial horizontal parallax, arc-seconds.</param>
 /// <param name="Topocentric">Place seen from the site, or null without one.</param>
+/// <param name="Libration">Moon only: total (optical + physical) libration, geocentric (Meeus 1998, ch. 53).</param>
+/// <param name="AxisPositionAngleDegrees">Moon only: position angle of the Moon's north pole, from celestial north through east, geocentric, degrees.</param>
+/// <param name="SubSolarPoint">Moon only: selenographic latitude and longitude of the sub-solar point.</param>
 public sealed record BodyPlace(
     double RightAscensionHours,
     double DeclinationDegrees,
@@ -42,7 +45,15 @@ public sealed record BodyPlace(
     double EclipticLatitudeDegrees,
     double SemiDiameterArcsec,
     double HorizontalParallaxArcsec,
-    TopocentricBodyPlace? Topocentric);
+    TopocentricBodyPlace? Topocentric,
+    LibrationResponse? Libration = null,
+    double? AxisPositionAngleDegrees = null,
+    LibrationResponse? SubSolarPoint = null);
+
+/// <summary>A selenographic point: for a libration, the point at the centre of the disc.</summary>
+/// <param name="LongitudeDegrees">Selenographic longitude, east (toward Mare Crisium) positive, degrees.</param>
+/// <param name="LatitudeDegrees">Selenographic latitude, north positive, degrees.</param>
+public sealed record LibrationResponse(double LongitudeDegrees, double LatitudeDegrees);
 
 /// <summary>A body seen from the site.</summary>
 /// <param name="RightAscensionHours">Topocentric right ascension, hours.</param>
@@ -52,6 +63,8 @@ public sealed record BodyPlace(
 /// <param name="AzimuthDegrees">Azimuth from north through east, degrees.</param>
 /// <param name="DistanceKm">Distance from the site, km.</param>
 /// <param name="SemiDiameterArcsec">Topocentric semi-diameter, arc-seconds.</param>
+/// <param name="Libration">Moon only: topocentric libration (the selenographic point at the centre of the disc seen from the site).</param>
+/// <param name="AxisPositionAngleDegrees">Moon only: position angle of the Moon's axis seen from the site, degrees.</param>
 public sealed record TopocentricBodyPlace(
     double RightAscensionHours,
     double DeclinationDegrees,
@@ -59,4 +72,6 @@ public sealed record TopocentricBodyPlace(
     double AirlessAltitudeDegrees,
     double AzimuthDegrees,
     double DistanceKm,
-    double SemiDiameterArcsec);
+    double SemiDiameterArcsec,
+    LibrationResponse? Libration = null,
+    double? AxisPositionAngleDegrees = null);

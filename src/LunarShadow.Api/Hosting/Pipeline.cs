@@ -1,3 +1,4 @@
+using LunarShadow.Api.Craters;
 using LunarShadow.Api.Eclipses;
 using LunarShadow.Api.Ephemeris;
 using LunarShadow.Api.Photography;
@@ -57,6 +58,7 @@ internal static class Pipeline
         app.MapLocalEndpoints();
         app.MapUpcomingEndpoints();
         app.MapPhotoEndpoints();
+        app.MapCraterEndpoints();
         return app;
     }
 }

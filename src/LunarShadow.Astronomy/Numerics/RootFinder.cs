@@ -89,4 +89,30 @@ public static class RootFinder
         }
         return null;
     }
+
+    // Kiefer (1953), golden-section search: the interval shrinks by 0.618 each step, keeping the least value bracketed.
+    /// <summary>The abscissa of the least value of a unimodal f in [a, b], to within <paramref name="tolerance"/>.</summary>
+    public static double Minimum(Func<double, double> f, double a, double b, double tolerance)
+    {
+        var ratio = (Math.Sqrt(5) - 1) / 2;
+        var c = b - ratio * (b - a);
+        var d = a + ratio * (b - a);
+        double fc = f(c), fd = f(d);
+        for (var iteration = 0; iteration < 200 && Math.Abs(b - a) > tolerance; iteration++)
+        {
+            if (fc < fd)
+            {
+                (b, d, fd) = (d, c, fc);
+                c = b - ratio * (b - a);
+                fc = f(c);
+            }
+            else
+            {
+                (a, c, fc) = (c, d, fd);
+                d = a + ratio * (b - a);
+                fd = f(d);
+            }
+        }
+        return (a + b) / 2;
+    }
 }

@@ -3,6 +3,7 @@ using LunarShadow.Api.Tests.Support;
 
 namespace LunarShadow.Api.Tests.Ephemeris;
 
+[Collection("Ephemeris and craters")]
 public class EphemerisEndpointTests(ApiFactory factory) : IClassFixture<ApiFactory>
 {
     private readonly HttpClient _client = factory.CreateClient();
@@ -82,5 +83,36 @@ public class EphemerisEndpointTests(ApiFactory factory) : IClassFixture<ApiFacto
         Assert.Contains("/api/v1/ephemeris", text, StringComparison.Ordinal);
         Assert.Contains("−90 to 90", text, StringComparison.Ordinal);
         Assert.Equal(HttpStatusCode.OK, (await _client.GetAsync("/docs/index.html")).StatusCode);
+    }
+
+    // Meeus (1998), Example 53.a, 1992 April 12, 0h TD (= 1992-04-11T23:59:01.816Z, as in Example 47.a's test):
+    // l = −1.23°, b = +4.20°, P = 15.08°, sub-solar l0 = 67.90°, b0 = +1.46° (printed to 0.01°).
+    [Fact]
+    public async Task Libration_and_axis_at_Meeus_example_53a_come_through_the_API()
+    {
+        var moon = (await JsonAssert.OkJson(await _client.GetAsync("/api/v1/ephemeris?utc=1992-04-11T23:59:01.816Z"))).GetProperty("moon");
+        var libration = moon.GetProperty("libration");
+        Assert.Equal(-1.23, libration.GetProperty("longitudeDegrees").GetDouble(), 0.008);
+        Assert.Equal(4.20, libration.GetProperty("latitudeDegrees").GetDouble(), 0.008);
+        Assert.Equal(15.08, moon.GetProperty("axisPositionAngleDegrees").GetDouble(), 0.008);
+        Assert.Equal(67.90, moon.GetProperty("subSolarPoint").GetProperty("longitudeDegrees").GetDouble(), 0.008);
+        Assert.Equal(1.46, moon.GetProperty("subSolarPoint").GetProperty("latitudeDegrees").GetDouble(), 0.008);
+        Assert.False(moon.TryGetProperty("topocentric", out var topo) && topo.ValueKind != System.Text.Json.JsonValueKind.Null);
+    }
+
+    // Meeus (1998), ch. 53 ("topocentric librations"): the parallax of up to 1° shifts the libration seen from a site by
+    // up to about 1° from the geocentric one; on the Moon's meridian at mid-latitude the shift is mostly in latitude.
+    [Fact]
+    public async Task A_site_adds_topocentric_libration_and_axis_within_a_degree_of_the_geocentric_ones()
+    {
+        var sun = await JsonAssert.OkJson(await _client.GetAsync("/api/v1/ephemeris?utc=2025-03-14T06:58:00Z&lat=47.07&lon=15.44&elevation=380"));
+        var moon = sun.GetProperty("moon");
+        var topo = moon.GetProperty("topocentric");
+        var dl = topo.GetProperty("libration").GetProperty("longitudeDegrees").GetDouble() - moon.GetProperty("libration").GetProperty("longitudeDegrees").GetDouble();
+        var db = topo.GetProperty("libration").GetProperty("latitudeDegrees").GetDouble() - moon.GetProperty("libration").GetProperty("latitudeDegrees").GetDouble();
+        Assert.InRange(Math.Sqrt(dl * dl + db * db), 0.05, 1.05);
+        var dp = topo.GetProperty("axisPositionAngleDegrees").GetDouble() - moon.GetProperty("axisPositionAngleDegrees").GetDouble();
+        Assert.InRange(Math.Abs(dp), 0, 1.5);
+        Assert.False(sun.GetProperty("sun").TryGetProperty("libration", out var none) && none.ValueKind != System.Text.Json.JsonValueKind.Null);
     }
 }
