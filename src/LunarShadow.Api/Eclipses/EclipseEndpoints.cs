@@ -61,7 +61,7 @@ internal static class EclipseEndpoints
         if (output is null) return Problems.NotAcceptable(Formats);
 
         var aborted = request.HttpContext.RequestAborted;
-        var eclipses = InDateRange(model, time, DayOf(first.Value), DayOf(last.Value) + 1)
+        var eclipses = request.FinderFor(model).OnUtcDates(first.Value, last.Value, time)
             .Select(e =>
             {
                 aborted.ThrowIfCancellationRequested(); // honours the request timeout on long ranges
@@ -85,27 +85,14 @@ internal static class EclipseEndpoints
         var day = reader.Date("date", date);
         var (model, time) = computation.Read(reader);
         var output = ContentNegotiation.Choose(request, format, Formats, reader);
-        if (EclipseLookup.Resolve(reader, day, date, output, Formats, model, time, out var eclipse) is { } problem) return problem;
+        if (EclipseLookup.Resolve(reader, day, date, output, Formats, request.FinderFor(model), time, out var eclipse) is { } problem) return problem;
         var response = EclipseMapping.ToResponse(eclipse, time);
         return output == OutputFormat.Csv
             ? Results.Text(EclipseMapping.Csv([response]), ContentNegotiation.MediaType(OutputFormat.Csv))
             : TypedResults.Ok(response);
     }
 
-    /// <summary>Eclipses whose greatest phase falls in [startDay, endDay) of UTC (Julian dates of 0h UTC).</summary>
-    internal static IEnumerable<LunarEclipse> InDateRange(ShadowModel model, TimeScaleConverter time, double startDay, double endDay)
-    {
-        // ΔT reaches about 13 hours at the ends of the span; search a day beyond each end, then keep by UTC.
-        var from = TtInstant.FromJulianDate(startDay - 1);
-        var to = TtInstant.FromJulianDate(endDay + 1);
-        foreach (var e in EclipseFinder.For(model).Between(from, to))
-        {
-            var utc = time.ToUtc(e.GreatestEclipse).ToJulianDate();
-            if (utc >= startDay && utc < endDay) yield return e;
-        }
-    }
-
-    private static double DayOf(CalendarDate date) => JulianDate.FromCalendar(date.Year, date.Month, date.Day, date.IsGregorian).Day;
+    private static double DayOf(CalendarDate date) => date.ToJulianDate().Day;
 
     private static double? LayerKm(ShadowModel model) => model.Kind == ShadowModelKind.Layer ? model.LayerHeightKm : null;
 

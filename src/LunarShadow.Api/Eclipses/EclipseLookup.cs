@@ -1,7 +1,6 @@
 using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Eclipses;
-using LunarShadow.Astronomy.Shadow;
 using LunarShadow.Astronomy.Time;
 
 namespace LunarShadow.Api.Eclipses;
@@ -11,15 +10,14 @@ internal static class EclipseLookup
 {
     /// <summary>A problem response to return, or null with the eclipse found.</summary>
     public static IResult? Resolve(QueryReader reader, CalendarDate? day, string date, OutputFormat? output, IEnumerable<OutputFormat> offered,
-        ShadowModel model, TimeScaleConverter time, out LunarEclipse eclipse)
+        EclipseFinder finder, TimeScaleConverter time, out LunarEclipse eclipse)
     {
         eclipse = null!;
         if (!reader.IsValid || day is null) return Problems.InvalidQuery(reader);
         if (output is null) return Problems.NotAcceptable(offered);
-        var start = JulianDate.FromCalendar(day.Value.Year, day.Value.Month, day.Value.Day, day.Value.IsGregorian).Day;
-        var found = EclipseEndpoints.InDateRange(model, time, start, start + 1).FirstOrDefault();
+        var found = finder.OnUtcDate(day.Value, time);
         if (found is null)
-            return Problems.NotFound($"No lunar eclipse has its greatest phase on {date} (UTC) under the {model.Name} shadow model. List nearby eclipses with /api/v1/eclipses?from=…&to=….");
+            return Problems.NotFound($"No lunar eclipse has its greatest phase on {date} (UTC) under the {finder.Model.Name} shadow model. List nearby eclipses with /api/v1/eclipses?from=…&to=….");
         eclipse = found;
         return null;
     }

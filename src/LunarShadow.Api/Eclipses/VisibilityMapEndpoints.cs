@@ -35,7 +35,7 @@ internal static class VisibilityMapEndpoints
         var day = reader.Date("date", date);
         var (model, time) = computation.Read(reader);
         var output = ContentNegotiation.Choose(request, format, Formats, reader);
-        if (EclipseLookup.Resolve(reader, day, date, output, Formats, model, time, out var eclipse) is { } problem) return problem;
+        if (EclipseLookup.Resolve(reader, day, date, output, Formats, request.FinderFor(model), time, out var eclipse) is { } problem) return problem;
 
         var regions = VisibilityMap.Compute(eclipse, time.DeltaTAt(eclipse.GreatestEclipse).Seconds);
         var features = regions.Select(r => new GeoJsonFeature(

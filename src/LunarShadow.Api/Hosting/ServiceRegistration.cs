@@ -13,6 +13,7 @@ internal static class ServiceRegistration
             .ReadFrom.Services(services)
             .Enrich.FromLogContext());
         builder.Services.AddSingleton<NodaTime.IClock>(NodaTime.SystemClock.Instance);
+        builder.Services.AddSingleton<LunarShadow.Astronomy.Eclipses.EclipseFinders>(); // the eclipse caches, one set per host
         builder.Services.AddLunarShadowRateLimiting(builder.Configuration);
         builder.Services.AddHealthChecks().AddCheck<ReadinessCheck>("ephemeris", tags: ["ready"]);
         builder.Services.AddRequestTimeouts(options => options.DefaultPolicy = new Microsoft.AspNetCore.Http.Timeouts.RequestTimeoutPolicy

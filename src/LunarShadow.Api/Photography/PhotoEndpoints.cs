@@ -66,7 +66,7 @@ internal static class PhotoEndpoints
         var (model, time) = computation.Read(reader);
         var (site, camera, settings) = PhotoRequest.Read(reader, field, time);
         var output = ContentNegotiation.Choose(request, format, Formats, reader);
-        if (EclipseLookup.Resolve(reader, day, date, output, Formats, model, time, out var eclipse) is { } problem) return problem;
+        if (EclipseLookup.Resolve(reader, day, date, output, Formats, request.FinderFor(model), time, out var eclipse) is { } problem) return problem;
 
         var plan = PhotoPlanner.Plan(eclipse, site!, camera!, settings!, time);
         var response = PhotoMapping.ToResponse(plan, time);

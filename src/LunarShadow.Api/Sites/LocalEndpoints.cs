@@ -70,7 +70,7 @@ internal static class LocalEndpoints
         var (model, time) = computation.Read(reader);
         var output = ContentNegotiation.Choose(request, format, SingleFormats, reader);
         if (site is null && reader.IsValid) reader.Fail("lat", "lat and lon are required.");
-        if (EclipseLookup.Resolve(reader, day, date, output, SingleFormats, model, time, out var eclipse) is { } problem) return problem;
+        if (EclipseLookup.Resolve(reader, day, date, output, SingleFormats, request.FinderFor(model), time, out var eclipse) is { } problem) return problem;
 
         var local = LocalCircumstancesCalculator.Compute(eclipse, site!, time);
         var plan = hours is null ? null : PublicNightPlanner.Plan(local, hours, time);
@@ -99,7 +99,7 @@ internal static class LocalEndpoints
         if (body.TooLarge is { } tooLarge) return Problems.TooLarge(tooLarge);
         if (body.Sites is null && reader.IsValid) reader.Fail("sites", "sites must hold at least one site.");
         var time = new TimeScaleConverter(body.DeltaT ?? Astronomy.Time.DeltaTModelCatalog.Default);
-        if (EclipseLookup.Resolve(reader, day, date, output, BatchFormats, body.Model ?? Astronomy.Shadow.ShadowModel.Danjon, time, out var eclipse) is { } problem) return problem;
+        if (EclipseLookup.Resolve(reader, day, date, output, BatchFormats, request.FinderFor(body.Model ?? Astronomy.Shadow.ShadowModel.Danjon), time, out var eclipse) is { } problem) return problem;
 
         var rows = body.Sites!.Select(s =>
         {

@@ -66,9 +66,9 @@ internal static class UpcomingEndpoints
         var criteria = new UpcomingCriteria(
             phaseName switch { "total" => EclipsePhase.Total, "partial" => EclipsePhase.Partial, _ => EclipsePhase.Penumbral },
             nightName == "true", null, hours);
-        var startTt = TtInstant.FromJulianDate(JulianDate.FromCalendar(start.Value.Year, start.Value.Month, start.Value.Day, start.Value.IsGregorian).Day);
+        var startTt = TtInstant.FromJulianDate(start.Value.ToJulianDate().Day);
         var aborted = request.HttpContext.RequestAborted;
-        var found = UpcomingEclipses.From(EclipseFinder.For(model), site, time, startTt, criteria)
+        var found = UpcomingEclipses.From(request.FinderFor(model), site, time, startTt, criteria)
             .Select(u =>
             {
                 aborted.ThrowIfCancellationRequested(); // honours the request timeout on long searches

@@ -14,6 +14,12 @@ public sealed class ApparentPlaceCalculator(LunarTheory moon, EarthOrbitTheory e
     /// <summary>The calculator on the embedded series (truncated ELP/MPP02, full VSOP87B).</summary>
     public static ApparentPlaceCalculator Default { get; } = new(LunarTheory.Truncated, EarthOrbitTheory.Vsop87B);
 
+    private static readonly Lazy<ApparentPlaceCalculator> ScreeningCalculator =
+        new(() => new ApparentPlaceCalculator(LunarTheory.Screening, EarthOrbitTheory.Screening));
+
+    /// <summary>The calculator on the screening series (good to some 20″), for cheap first looks such as eclipse screening.</summary>
+    public static ApparentPlaceCalculator Screening => ScreeningCalculator.Value;
+
     private static readonly RotationMatrix EclipticToEquatorJ2000 = RotationMatrix.AboutX(-VondrakPrecession.ObliquityAtJ2000.Radians);
 
     /// <summary>
