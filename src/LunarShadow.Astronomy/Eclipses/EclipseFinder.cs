@@ -68,6 +68,11 @@ public sealed class EclipseFinder
     /// <summary>The shadow model.</summary>
     public ShadowModel Model { get; }
 
+    // How many exact passages this finder has computed (each lunation at most once): for tests of the cache.
+    private long _passagesComputed;
+
+    internal long PassagesComputed => Interlocked.Read(ref _passagesComputed);
+
     /// <summary>Every eclipse whose greatest eclipse falls in [from, to), in time order.</summary>
     public IEnumerable<LunarEclipse> Between(TtInstant from, TtInstant to)
     {
@@ -124,6 +129,7 @@ public sealed class EclipseFinder
     private EclipseSolution? Compute(long k)
     {
         if (Screen(k) is not { } screen) return null;
+        Interlocked.Increment(ref _passagesComputed);
         var passage = ShadowPassage.Compute(_accurate, screen.Opposition);
         return Solve(k, passage);
     }
