@@ -55,6 +55,7 @@ public sealed class LunarEclipse
         MoonAtGreatest = moonAtGreatest;
         Model = model;
         Passage = passage;
+        Moments = EclipseMoment.InTimeOrder(contacts, greatestEclipse);
         _nightSky = new Lazy<EclipseNightSky>(() => EclipseNightSky.Compute(ApparentPlaceCalculator.Default, greatestEclipse),
             LazyThreadSafetyMode.ExecutionAndPublication);
     }
@@ -97,6 +98,9 @@ public sealed class LunarEclipse
 
     /// <summary>The fitted passage, from which local circumstances are derived.</summary>
     public ShadowPassage Passage { get; }
+
+    /// <summary>The contacts with greatest eclipse in its place, in time order.</summary>
+    public IReadOnlyList<EclipseMoment> Moments { get; }
 
     /// <summary>
     /// The Moon and Sun over the eclipse night, fitted on first use (once, also under concurrent first use) and kept
