@@ -201,9 +201,9 @@ public sealed class EclipseFinder
         var radii = ShadowCrossSection.RadiiTowardMoon(Model, g);
         var moonRadius = g.MoonSemiDiameter.Radians;
         var separation = g.Separation.Radians;
-        var penumbralMagnitude = (radii.Penumbra.Radians + moonRadius - separation) / (2 * moonRadius);
+        var penumbralMagnitude = ShadowCrossSection.Magnitude(radii.Penumbra.Radians, moonRadius, separation);
         if (penumbralMagnitude <= 0) return null;
-        var umbralMagnitude = (radii.Umbra.Radians + moonRadius - separation) / (2 * moonRadius);
+        var umbralMagnitude = ShadowCrossSection.Magnitude(radii.Umbra.Radians, moonRadius, separation);
 
         var contacts = new List<EclipseContact>(6);
         void AddPair(ContactName before, ContactName after, Func<ShadowGeometry, double> reach, bool internalContact)

@@ -75,7 +75,7 @@ public sealed class ApparentPlaceCalculator(LunarTheory moon, EarthOrbitTheory e
         var distance = topocentric.Length;
         var hourAngle = (greenwichApparentSiderealTime + site.Longitude - rightAscension).NormalizedSigned();
         var horizontal = HorizontalCoordinates.FromHourAngle(hourAngle, declination, site.Latitude);
-        var semiDiameter = Angle.FromRadians(Math.Asin(Math.Sin(body.SemiDiameter.Radians) * body.DistanceKm / distance));
+        var semiDiameter = BodyDisc.AtDistance(body.SemiDiameter, body.DistanceKm, distance);
         return new TopocentricPlace(
             rightAscension, declination, distance, hourAngle,
             horizontal.Altitude, AtmosphericRefraction.Apply(horizontal.Altitude, air), horizontal.Azimuth, semiDiameter);
