@@ -71,6 +71,7 @@ internal static class ColdCatalogueTiming
         start.Environment["Serilog__MinimumLevel__Default"] = "Warning";
         start.Environment["RateLimiting__PermitsPerSecond"] = "1000000";
         start.Environment["RateLimiting__Burst"] = "1000000";
+        start.Environment["RequestTimeoutSeconds"] = "600"; // a loaded machine must not turn a slow answer into a 503
         using var service = Process.Start(start)!;
         service.OutputDataReceived += (_, _) => { };
         service.ErrorDataReceived += (_, _) => { };
