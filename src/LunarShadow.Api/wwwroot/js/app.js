@@ -1,76 +1,192 @@
-// The page: choose an eclipse and a site, then draw what that site sees.
-import { getJson, localUrl, eclipseUrl, mapUrl, upcomingUrl, siteQuery } from './api.js';
-import { drawTimeline, drawShadow, drawMap } from './charts.js';
+// The page: choose an eclipse and a site, then draw what that site sees. Opens on an example; every result has a URL.
+import { getJson, localUrl, eclipseUrl, mapUrl, upcomingUrl, visibleUrl, eclipsesUrl, shiftYears, siteQuery, SITE_KEYS, ApiError } from './api.js';
+import { drawTimeline } from './timeline.js';
+import { drawShadow } from './shadow.js';
+import { drawMap } from './worldmap.js';
+import { wallClock, longDate, localDateOf, zoneAbbreviation, offsetMinutes, utcOffsetText } from './time.js';
+import { showPhotoSection } from './photo.js';
 
 const $ = (id) => document.getElementById(id);
+
+// The invented Hollowmere Hill Public Observatory, and an eclipse it can show its visitors in full.
+export const EXAMPLE = { date: '2029-12-20', lat: '47.31', lon: '11.42', elevation: '1120', tz: 'Europe/Vienna', horizon: '', open: '20:00-01:00' };
+
 let land = null;
+let last = null;
+let listKey = '';
 
-function site() {
-  return { lat: $('lat').value.trim(), lon: $('lon').value.trim(), elevation: $('elevation').value.trim(), tz: $('tz').value.trim(), horizon: $('horizon').value.trim(), open: $('open').value.trim() };
-}
+const site = () => Object.fromEntries(SITE_KEYS.map((k) => [k, $(k).value.trim()]));
+const chosenDate = () => $('eclipse-date').value.trim() || $('eclipse').value;
 
-async function loadEclipses() {
+/** The list of coming eclipses, each with its local date at the site and whether the site can see it. */
+async function loadEclipses(s) {
+  const key = `${s.lat}|${s.lon}|${s.elevation}|${s.tz}|${s.horizon}`;
+  if (key === listKey) return;
+  listKey = key;
   const today = new Date().toISOString().slice(0, 10);
   try {
-    const list = await getJson(upcomingUrl(today, 15));
-    $('eclipse').innerHTML = '';
+    const [list, visible] = await Promise.all([
+      getJson(upcomingUrl(today, 15)),
+      getJson(visibleUrl(s, today, 40)).catch(() => null),
+    ]);
+    const seen = new Map((visible?.eclipses ?? []).map((e) => [e.date, e]));
+    const select = $('eclipse');
+    select.innerHTML = '';
     for (const e of list.eclipses) {
+      const v = seen.get(e.date);
+      const localDate = v ? wallClock(v.greatestEclipseLocal).date : localDateOf(e.greatestEclipse.utc, s.tz || 'UTC');
+      const mark = visible === null ? '' : v ? ' · ✓ visible' : ' · not visible here';
       const option = document.createElement('option');
       option.value = e.date;
-      option.textContent = `${e.date} — ${e.kind} (umbral magnitude ${e.umbralMagnitude.toFixed(2)})`;
-      $('eclipse').appendChild(option);
+      option.textContent = `${longDate(localDate)} (local) · ${e.kind}, magnitude ${e.umbralMagnitude.toFixed(2)}${mark}`;
+      option.dataset.visible = v ? 'yes' : 'no';
+      select.appendChild(option);
     }
-  } catch (error) {
+  } catch {
     $('eclipse').innerHTML = '<option value="">Could not load the list</option>';
+    listKey = '';
   }
+  syncList();
 }
 
-function row(cells) {
+/** Keeps the list showing the date in the field; a date outside the list gets its own entry at the top. */
+function syncList() {
+  const date = $('eclipse-date').value.trim();
+  const select = $('eclipse');
+  select.querySelector('option[data-typed]')?.remove();
+  if (!date) return;
+  if (![...select.options].some((o) => o.value === date)) {
+    const option = Object.assign(document.createElement('option'), { value: date, textContent: `${date} (UTC) · typed in` });
+    option.dataset.typed = 'yes';
+    select.insertBefore(option, select.firstChild);
+  }
+  select.value = date;
+}
+
+function row(cells, labels) {
   const tr = document.createElement('tr');
-  for (const [text, cls] of cells) {
-    const td = document.createElement('td');
+  cells.forEach(([text, cls], i) => {
+    const td = document.createElement(i === 0 ? 'th' : 'td');
+    if (i === 0) td.scope = 'row';
     td.textContent = text;
+    td.dataset.label = labels[i];
     if (cls) td.className = cls;
     tr.appendChild(td);
-  }
+  });
   return tr;
 }
 
-const clock = (local) => local.slice(11, 19) + ' ' + local.slice(23);
+function clearError() {
+  $('error').hidden = true;
+  for (const k of SITE_KEYS.concat(['eclipse-date'])) $(k).removeAttribute('aria-invalid');
+}
 
-async function show(event) {
-  event?.preventDefault();
-  const date = $('eclipse-date').value.trim() || $('eclipse').value;
-  const s = site();
-  $('summary').textContent = 'Computing…';
-  $('result').hidden = false;
-  try {
-    const [local, eclipse, map] = await Promise.all([
-      getJson(localUrl(date, s, { track: 10 })), getJson(eclipseUrl(date)), getJson(mapUrl(date)),
-    ]);
-    land ??= await getJson('data/land-110m.geojson');
-    $('summary').textContent = local.summary + (local.publicNight ? ' ' + local.publicNight.note : '');
-    $('cautions').innerHTML = '';
-    for (const c of local.cautions) $('cautions').appendChild(Object.assign(document.createElement('li'), { textContent: c }));
-    drawTimeline($('timeline-chart'), local, eclipse);
-    drawShadow($('shadow-diagram'), eclipse);
-    drawMap($('world-map'), land, map, { lat: Number(s.lat), lon: Number(s.lon) });
-    const body = $('contacts').querySelector('tbody');
-    body.innerHTML = '';
-    for (const c of local.contacts) {
-      body.appendChild(row([
-        [c.name], [clock(c.local) + (c.localNote ? ' *' : '')], [`${c.altitudeDegrees.toFixed(1)}°`], [`${c.azimuthDegrees.toFixed(0)}°`],
-        [c.visible ? 'yes' : 'no', c.visible ? '' : 'no'], [c.sky.replace('-', ' ')], [c.zenithPositionAngleDegrees == null ? '—' : `${c.zenithPositionAngleDegrees.toFixed(0)}°`],
-      ]));
-    }
-    exports(date, s);
-  } catch (error) {
-    $('summary').textContent = error.message;
+const FIELD_INPUT = { lat: 'lat', lon: 'lon', elevation: 'elevation', tz: 'tz', horizon: 'horizon', open: 'open', date: 'eclipse-date' };
+
+/** Shows a failure as an error panel, hides the charts, and for a date without an eclipse offers the nearest ones. */
+async function showError(error, date, s) {
+  $('result').hidden = true;
+  $('photo').hidden = true;
+  $('error').hidden = false;
+  // A missing eclipse: say so in plain words; the nearest eclipses follow as links.
+  const named = Object.keys(error.fields ?? {}).length > 0;
+  $('error-message').textContent = error.status === 404 ? `${error.message.split('. ')[0]}.`
+    : named ? 'Please correct the marked fields:' : error.message;
+  const fields = $('error-fields');
+  fields.innerHTML = '';
+  for (const [field, messages] of Object.entries(error.fields ?? {})) {
+    const input = FIELD_INPUT[field];
+    if (input) $(input).setAttribute('aria-invalid', 'true');
+    for (const m of messages) fields.appendChild(Object.assign(document.createElement('li'), { textContent: m }));
+  }
+  $('nearest').hidden = true;
+  if (location.search) $('error').scrollIntoView({ block: 'start' });
+  if (error.status === 404 && /^-?\d{4}-\d\d-\d\d$/.test(date)) {
+    try {
+      const around = await getJson(eclipsesUrl(shiftYears(date, -2), shiftYears(date, 2)));
+      const before = around.eclipses.filter((e) => e.date < date).slice(-2);
+      const after = around.eclipses.filter((e) => e.date > date).slice(0, 2);
+      const list = $('nearest-list');
+      list.innerHTML = '';
+      for (const e of [...before, ...after]) {
+        const q = siteQuery(s);
+        q.set('date', e.date);
+        const a = Object.assign(document.createElement('a'), { href: `?${q}`, textContent: `${e.date} — ${e.kind} eclipse` });
+        a.addEventListener('click', (ev) => { ev.preventDefault(); $('eclipse-date').value = e.date; show(); });
+        list.appendChild(document.createElement('li')).appendChild(a);
+      }
+      $('nearest').hidden = list.children.length === 0;
+    } catch { /* the error itself is already shown */ }
   }
 }
 
-function exports(date, s) {
-  const origin = window.location.origin;
+function drawAll() {
+  if (!last) return;
+  const { local, eclipse, map, s } = last;
+  drawTimeline($('timeline-chart'), local, eclipse);
+  drawShadow($('shadow-diagram'), eclipse);
+  drawMap($('world-map'), land, map, { lat: Number(s.lat), lon: Number(s.lon) });
+}
+
+/** The shareable address of the current choice. */
+function shareUrl(date, s) {
+  const q = siteQuery(s);
+  q.set('date', date);
+  return `${location.pathname}?${q}`;
+}
+
+export async function show(event) {
+  event?.preventDefault();
+  const date = chosenDate();
+  const s = site();
+  clearError();
+  syncList();
+  if (event) history.pushState(null, '', shareUrl(date, s));
+  $('summary').textContent = 'Computing…';
+  try {
+    if (!date) throw new ApiError('Choose an eclipse from the list or type the date of greatest eclipse (YYYY-MM-DD).', 400, { date: ['date is required, YYYY-MM-DD.'] });
+    const local = await getJson(localUrl(date, s, { track: 10 }));
+    const [eclipse, map] = await Promise.all([getJson(eclipseUrl(date)), getJson(mapUrl(date))]);
+    land ??= await getJson('data/land-110m.geojson');
+    last = { local, eclipse, map, s, date };
+    $('result').hidden = false;
+    const g = local.contacts.find((c) => c.name === 'greatest') ?? local.contacts[0];
+    const offset = offsetMinutes(g.local);
+    const zone = zoneAbbreviation(local.site.timeZone, Date.parse(g.utc), offset, local.site.zoneAbbreviation);
+    $('result-when').textContent = `${local.eclipse.kind[0].toUpperCase()}${local.eclipse.kind.slice(1)} eclipse of ${longDate(wallClock(g.local).date)} (local), times in ${local.site.timeZone} — ${zone}${zone.startsWith('UTC') ? '' : ', ' + utcOffsetText(offset)}.`;
+    $('summary').textContent = local.summary + (local.publicNight?.note ? ' ' + local.publicNight.note : '');
+    $('cautions').innerHTML = '';
+    for (const c of local.cautions) $('cautions').appendChild(Object.assign(document.createElement('li'), { textContent: c }));
+    drawAll();
+    contactTable(local);
+    exportsFor(date, s);
+    loadEclipses(s);
+    showPhotoSection(date, s);
+    if (event) $('result').scrollIntoView({ block: 'start' });
+  } catch (error) {
+    await showError(error instanceof ApiError ? error : new ApiError(String(error.message ?? error), 0), date, s);
+  }
+}
+
+function contactTable(local) {
+  const labels = [...$('contacts').querySelectorAll('thead th')].map((th) => th.textContent);
+  const body = $('contacts').querySelector('tbody');
+  body.innerHTML = '';
+  const firstDate = wallClock(local.contacts[0].local).date;
+  const notes = new Set();
+  for (const c of local.contacts) {
+    const w = wallClock(c.local);
+    const dayMark = w.date !== firstDate ? ` (${longDate(w.date, false)})` : '';
+    if (c.localNote) notes.add(c.localNote);
+    body.appendChild(row([
+      [c.name === 'greatest' ? 'greatest' : c.name], [`${w.hms}${dayMark}${c.localNote ? ' †' : ''}`], [`${c.altitudeDegrees.toFixed(1)}°`], [`${c.azimuthDegrees.toFixed(0)}°`],
+      [c.visible ? 'yes' : 'no', c.visible ? '' : 'no'], [c.sky.replace(/-/g, ' ')], [c.zenithPositionAngleDegrees == null ? '—' : `${c.zenithPositionAngleDegrees.toFixed(0)}°`],
+    ], labels));
+  }
+  $('contact-notes').textContent = notes.size ? `† ${[...notes].join(' ')}` : '';
+}
+
+function exportsFor(date, s) {
   const list = $('exports');
   list.innerHTML = '';
   const links = [
@@ -78,16 +194,28 @@ function exports(date, s) {
     ['Add to calendar (iCalendar)', localUrl(date, s, { format: 'ics' }), `eclipse-${date}.ics`],
     ['Everything as JSON', localUrl(date, s), `eclipse-${date}.json`],
     ['Subscribe: eclipses visible from here', `/api/v1/sites/upcoming?${siteQuery(s)}&phase=partial&format=ics`, null],
+    ['Link to this page', shareUrl(date, s), null],
   ];
   for (const [label, href, file] of links) {
     const a = Object.assign(document.createElement('a'), { textContent: label, href });
     if (file) a.download = file;
-    list.appendChild(Object.assign(document.createElement('li'), {})).appendChild(a);
+    list.appendChild(document.createElement('li')).appendChild(a);
   }
+  embedSnippet(date, s);
+}
+
+// The card's own height at 420 px wide with seven contacts (measured); the card also posts its height to the host.
+export const EMBED_SIZE = { width: 420, height: 500 };
+
+function embedSnippet(date, s) {
   const q = siteQuery(s);
+  q.delete('open');
   q.set('date', date);
-  q.set('theme', 'dark');
-  $('embed-code').value = `<iframe src="${origin}/embed.html?${q}" width="420" height="340" title="Lunar eclipse of ${date}" style="border:0"></iframe>`;
+  q.set('theme', $('embed-theme').value);
+  const src = `${location.origin}/embed.html?${q}`;
+  $('embed-code').value =
+    `<iframe src="${src.replace(/&/g, '&amp;')}" width="${EMBED_SIZE.width}" height="${EMBED_SIZE.height}" title="Lunar eclipse of ${date}" style="border:0;max-width:100%" data-lunarshadow></iframe>\n` +
+    '<script>addEventListener("message",e=>{if(e.data&&e.data.type==="lunarshadow:height")for(const f of document.querySelectorAll("iframe[data-lunarshadow]"))if(f.contentWindow===e.source)f.height=e.data.height})</script>';
 }
 
 function locate() {
@@ -96,13 +224,30 @@ function locate() {
     $('lat').value = p.coords.latitude.toFixed(4);
     $('lon').value = p.coords.longitude.toFixed(4);
     if (p.coords.altitude) $('elevation').value = Math.round(p.coords.altitude);
+    $('tz').value = Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
   });
 }
 
-$('tz').value = Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
+function restore() {
+  const params = new URLSearchParams(location.search);
+  const fromUrl = params.has('lat') || params.has('lon') || params.has('date');
+  const values = fromUrl ? Object.fromEntries([...SITE_KEYS, 'date'].map((k) => [k, params.get(k) ?? ''])) : EXAMPLE;
+  for (const k of SITE_KEYS) $(k).value = values[k] ?? '';
+  if (!$('elevation').value) $('elevation').value = '0';
+  if (fromUrl && !values.tz) $('tz').value = '';
+  $('eclipse-date').value = values.date ?? '';
+  $('example-note').hidden = fromUrl;
+}
+
 $('plan').addEventListener('submit', show);
 $('locate').addEventListener('click', locate);
-const params = new URLSearchParams(window.location.search);
-for (const key of ['lat', 'lon', 'elevation', 'tz', 'horizon', 'open']) if (params.has(key)) $(key).value = params.get(key);
-if (params.has('date')) $('eclipse-date').value = params.get('date');
-loadEclipses().then(() => { if (params.has('lat') && params.has('lon')) show(); });
+$('eclipse').addEventListener('change', () => { $('eclipse-date').value = $('eclipse').value; syncList(); });
+$('eclipse-date').addEventListener('input', syncList);
+$('embed-theme').addEventListener('change', () => last && embedSnippet(last.date, last.s));
+for (const k of SITE_KEYS) $(k).addEventListener('input', () => { $('example-note').hidden = true; });
+window.addEventListener('popstate', () => { restore(); show(); });
+let resizeTimer;
+window.addEventListener('resize', () => { clearTimeout(resizeTimer); resizeTimer = setTimeout(drawAll, 150); });
+restore();
+loadEclipses(site());
+show();

@@ -1,7 +1,7 @@
 using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Shadow;
 
-namespace LunarShadow.Api.Eclipses;
+namespace LunarShadow.Api.Common;
 
 /// <summary>The host's eclipse finders (a DI singleton, registered in ServiceRegistration), reached from a request.</summary>
 internal static class EclipseFinderAccess
