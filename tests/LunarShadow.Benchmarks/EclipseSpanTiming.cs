@@ -1,7 +1,7 @@
 using System.Diagnostics;
+using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Ephemeris;
 using LunarShadow.Astronomy.Frames;
-using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Shadow;
 using LunarShadow.Astronomy.Sites;
 using LunarShadow.Astronomy.Time;

@@ -1,5 +1,5 @@
-using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Common;
+using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Embedded;
@@ -17,10 +17,12 @@ internal static class EclipseEndpoints
     private static readonly FormatOffer Formats = new(OutputFormat.Json, OutputFormat.Csv);
 
     public static readonly Parameter From = new("from", ParameterType.Date,
-        $"First UTC date of greatest eclipse, YYYY-MM-DD, years {SupportedRange.FirstYear} to +{SupportedRange.LastYear}.") { Required = true };
+        $"First UTC date of greatest eclipse, YYYY-MM-DD, years {SupportedRange.FirstYear} to +{SupportedRange.LastYear}.")
+    { Required = true };
 
     public static readonly Parameter To = new("to", ParameterType.Date,
-        $"Last UTC date of greatest eclipse (inclusive), YYYY-MM-DD, at most {MaxYearsPerRequest} years after from.") { Required = true };
+        $"Last UTC date of greatest eclipse (inclusive), YYYY-MM-DD, at most {MaxYearsPerRequest} years after from.")
+    { Required = true };
 
     public static readonly Parameter Kind = new("kind", ParameterType.ChoiceList, "Kinds of eclipse to keep (default: all).")
     {

@@ -1,7 +1,6 @@
-using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Common;
+using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Validation;
-using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Sites;
 using LunarShadow.Astronomy.Time;
 using NodaTime;

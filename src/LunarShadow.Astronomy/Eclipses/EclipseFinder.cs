@@ -1,5 +1,4 @@
 using System.Collections.Concurrent;
-using LunarShadow.Astronomy.Ephemeris;
 using LunarShadow.Astronomy.Frames;
 using LunarShadow.Astronomy.Numerics;
 using LunarShadow.Astronomy.Shadow;
