@@ -1,7 +1,7 @@
 using System.Diagnostics;
+using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Ephemeris;
 using LunarShadow.Astronomy.Frames;
-using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Shadow;
 using LunarShadow.Astronomy.Sites;
 using LunarShadow.Astronomy.Time;
@@ -17,7 +17,7 @@ internal static class EclipseSpanTiming
     public static void Run()
     {
         var screening = new ApparentPlaceCalculator(LunarTheory.Screening, EarthOrbitTheory.Screening);
-        EclipseFinder Fresh() => new(ShadowModel.Danjon, ApparentPlaceCalculator.Default, screening);
+        EclipseFinder Fresh() => new(ShadowModel.Danjon, ApparentPlaceCalculator.Default, screening, maxParallelism: 1);
         // Warm up the JIT and the embedded data on one decade.
         _ = Fresh().Between(At(2000), At(2010)).Count();
 

@@ -17,7 +17,7 @@ internal static class EclipseLookup
     {
         var day = f.Date(Parameters.EclipseDate);
         var (model, time) = ModelChoice.Read(f);
-        return new EclipseRequest(day, model, time, offer.Choose(request, f));
+        return new EclipseRequest(day, model, time, offer.Choose(request, f), request.FinderFor(model));
     }
 
     /// <summary>A problem response to return, or null with the eclipse found.</summary>
@@ -26,26 +26,11 @@ internal static class EclipseLookup
         eclipse = null!;
         if (!f.Reader.IsValid || r.Day is null) return Problems.InvalidQuery(f.Reader);
         if (r.Output is null) return Problems.NotAcceptable(offer.Formats);
-        var start = JulianDate.FromCalendar(r.Day.Value.Year, r.Day.Value.Month, r.Day.Value.Day, r.Day.Value.IsGregorian).Day;
-        var found = InDateRange(r.Model, r.Time, start, start + 1).FirstOrDefault();
+        var found = r.Finder.OnUtcDate(r.Day.Value, r.Time);
         if (found is null)
             return Problems.NotFound($"No lunar eclipse has its greatest phase on {r.Day.Value.ToIsoDateString()} (UTC) under the {r.Model.Name} shadow model. List nearby eclipses with /api/v1/eclipses?from=…&to=….");
         eclipse = found;
         return null;
-    }
-
-    /// <summary>Eclipses whose greatest phase falls in [startDay, endDay) of UTC (Julian dates of 0h UTC).</summary>
-    public static IEnumerable<LunarEclipse> InDateRange(ShadowModel model, TimeScaleConverter time, double startDay, double endDay,
-        CancellationToken cancellationToken = default)
-    {
-        // ΔT reaches about 13 hours at the ends of the span; search a day beyond each end, then keep by UTC.
-        var from = TtInstant.FromJulianDate(startDay - 1);
-        var to = TtInstant.FromJulianDate(endDay + 1);
-        foreach (var e in EclipseFinder.For(model).Between(from, to, cancellationToken))
-        {
-            var utc = time.ToUtc(e.GreatestEclipse).ToJulianDate();
-            if (utc >= startDay && utc < endDay) yield return e;
-        }
     }
 }
 
@@ -54,4 +39,5 @@ internal static class EclipseLookup
 /// <param name="Model">The shadow model.</param>
 /// <param name="Time">The time scales.</param>
 /// <param name="Output">The representation chosen, or null when the Accept header admits none.</param>
-internal sealed record EclipseRequest(CalendarDate? Day, ShadowModel Model, TimeScaleConverter Time, OutputFormat? Output);
+/// <param name="Finder">The host's eclipse finder for the model.</param>
+internal sealed record EclipseRequest(CalendarDate? Day, ShadowModel Model, TimeScaleConverter Time, OutputFormat? Output, EclipseFinder Finder);

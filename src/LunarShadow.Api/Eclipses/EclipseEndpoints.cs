@@ -1,5 +1,5 @@
-using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Common;
+using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Embedded;
@@ -17,10 +17,12 @@ internal static class EclipseEndpoints
     private static readonly FormatOffer Formats = new(OutputFormat.Json, OutputFormat.Csv);
 
     public static readonly Parameter From = new("from", ParameterType.Date,
-        $"First UTC date of greatest eclipse, YYYY-MM-DD, years {SupportedRange.FirstYear} to +{SupportedRange.LastYear}.") { Required = true };
+        $"First UTC date of greatest eclipse, YYYY-MM-DD, years {SupportedRange.FirstYear} to +{SupportedRange.LastYear}.")
+    { Required = true };
 
     public static readonly Parameter To = new("to", ParameterType.Date,
-        $"Last UTC date of greatest eclipse (inclusive), YYYY-MM-DD, at most {MaxYearsPerRequest} years after from.") { Required = true };
+        $"Last UTC date of greatest eclipse (inclusive), YYYY-MM-DD, at most {MaxYearsPerRequest} years after from.")
+    { Required = true };
 
     public static readonly Parameter Kind = new("kind", ParameterType.ChoiceList, "Kinds of eclipse to keep (default: all).")
     {
@@ -67,7 +69,7 @@ internal static class EclipseEndpoints
 
         var aborted = request.HttpContext.RequestAborted;
         // Stops at the request's deadline or when the client goes away (checked per full Moon scanned).
-        var eclipses = EclipseLookup.InDateRange(model, time, DayOf(first.Value), DayOf(last.Value) + 1, aborted)
+        var eclipses = request.FinderFor(model).OnUtcDates(first.Value, last.Value, time, aborted)
             .Where(e => kinds.Contains(WireNames.Of(e.Kind)))
             .Select(e => EclipseMapping.ToResponse(e, time))
             .ToList();
@@ -90,7 +92,7 @@ internal static class EclipseEndpoints
             : TypedResults.Ok(response);
     }
 
-    private static double DayOf(CalendarDate date) => JulianDate.FromCalendar(date.Year, date.Month, date.Day, date.IsGregorian).Day;
+    private static double DayOf(CalendarDate date) => date.ToJulianDate().Day;
 
     private static double? LayerKm(ShadowModel model) => model.Kind == ShadowModelKind.Layer ? model.LayerHeightKm : null;
 }

@@ -1,5 +1,5 @@
-using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Common;
+using LunarShadow.Api.Formatting;
 using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Shadow;
 using LunarShadow.Astronomy.Time;
@@ -43,18 +43,10 @@ internal static class EclipseMapping
 
     private static ShadowDiagramResponse Diagram(LunarEclipse e)
     {
-        PathPointResponse Point(string name, TtInstant tt)
-        {
-            var g = e.Passage.At(e.Passage.HoursFromCenter(tt));
-            const double degrees = 180 / Math.PI;
-            return new PathPointResponse(name, TimeFormats.Round(Math.Atan(g.XiRadians) * degrees, 5), TimeFormats.Round(Math.Atan(g.EtaRadians) * degrees, 5));
-        }
-        var points = e.Contacts.Where(c => c.Name <= ContactName.U2).Select(c => Point(c.Name.ToString(), c.Tt))
-            .Append(Point("greatest", e.GreatestEclipse))
-            .Concat(e.Contacts.Where(c => c.Name >= ContactName.U3).Select(c => Point(c.Name.ToString(), c.Tt)))
-            .ToList();
-        return new ShadowDiagramResponse(TimeFormats.Round(e.RadiiAtGreatest.Umbra.Degrees, 5), TimeFormats.Round(e.RadiiAtGreatest.Penumbra.Degrees, 5),
-            TimeFormats.Round(e.MoonAtGreatest.SemiDiameter.Degrees, 5), points);
+        var d = ShadowDiagram.Of(e);
+        return new ShadowDiagramResponse(TimeFormats.Round(d.UmbraRadius.Degrees, 5), TimeFormats.Round(d.PenumbraRadius.Degrees, 5),
+            TimeFormats.Round(d.MoonRadius.Degrees, 5),
+            d.Points.Select(p => new PathPointResponse(p.Moment.Label, TimeFormats.Round(p.East.Degrees, 5), TimeFormats.Round(p.North.Degrees, 5))).ToList());
     }
 
     public static string Csv(IEnumerable<EclipseResponse> eclipses)

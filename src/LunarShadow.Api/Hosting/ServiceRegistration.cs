@@ -16,6 +16,7 @@ internal static class ServiceRegistration
             .Enrich.FromLogContext(), preserveStaticLogger: true);
         builder.Services.AddSingleton<NodaTime.IClock>(NodaTime.SystemClock.Instance);
         builder.Services.AddLunarShadowForwardedHeaders(builder.Configuration);
+        builder.Services.AddSingleton<LunarShadow.Astronomy.Eclipses.EclipseFinders>(); // the eclipse caches, one set per host
         builder.Services.AddLunarShadowRateLimiting(builder.Configuration);
         builder.Services.AddPublicReadCors();
         builder.Services.AddHealthChecks().AddCheck<ReadinessCheck>("ephemeris", tags: ["ready"]);

@@ -1,7 +1,6 @@
-using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Common;
+using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Validation;
-using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Sites;
 using LunarShadow.Astronomy.Time;
 using NodaTime;
@@ -64,10 +63,10 @@ internal static class UpcomingEndpoints
         if (output is null) return Problems.NotAcceptable(Formats.Formats);
 
         var criteria = new UpcomingCriteria(Enum.GetValues<EclipsePhase>().First(p => WireNames.Of(p) == phaseName), nightOnly, null, site.Hours);
-        var startTt = TtInstant.FromJulianDate(JulianDate.FromCalendar(start.Value.Year, start.Value.Month, start.Value.Day, start.Value.IsGregorian).Day);
+        var startTt = TtInstant.FromJulianDate(start.Value.ToJulianDate().Day);
         var aborted = request.HttpContext.RequestAborted;
         // Stops at the request's deadline or when the client goes away (checked per eclipse scanned).
-        var found = UpcomingEclipses.From(EclipseFinder.For(model), site.Site, time, startTt, criteria, aborted).Take(wanted).ToList();
+        var found = UpcomingEclipses.From(request.FinderFor(model), site.Site, time, startTt, criteria, aborted).Take(wanted).ToList();
         var items = found.Select(u =>
         {
             var full = LocalMapping.ToResponse(u.Local, time, null);

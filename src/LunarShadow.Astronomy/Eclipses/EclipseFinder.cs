@@ -1,5 +1,4 @@
 using System.Collections.Concurrent;
-using LunarShadow.Astronomy.Ephemeris;
 using LunarShadow.Astronomy.Frames;
 using LunarShadow.Astronomy.Numerics;
 using LunarShadow.Astronomy.Shadow;
@@ -11,73 +10,141 @@ namespace LunarShadow.Astronomy.Eclipses;
 /// <summary>
 /// Finds lunar eclipses under one shadow model: every full Moon is screened cheaply (mean argument of latitude, then
 /// the opposition found on amplitude-truncated series), the survivors get an exact <see cref="ShadowPassage"/> from
-/// which greatest eclipse, magnitudes and contacts are solved. Results are cached per lunation; thread-safe.
+/// which greatest eclipse, magnitudes and contacts are solved. Results are cached per lunation, each computed once
+/// even when many threads ask for it at the same time; thread-safe. Hold one per model for the process, through
+/// <see cref="EclipseFinders"/>.
 /// </summary>
 public sealed class EclipseFinder
 {
     // Meeus (1998), ch. 54: no lunar eclipse when |sin F| > 0.36 at the mean full Moon; 0.45 keeps a wide margin.
     private const double SinArgumentOfLatitudeLimit = 0.45;
 
+    // Lunations per step of a range search: each step's full Moons are solved on all allowed cores, then read in order.
+    private const int LunationsPerStep = 64;
+
+    // Lunations in one Saros.
+    private const long SarosLunations = 223;
+
     // The screening series are good to some 20″; the least separation is at least 0.99 of that at opposition (the
     // relative orbit is inclined about 5.5°). Screen with a margin of 0.05°.
     private static readonly double ScreeningMarginRadians = Angle.FromDegrees(0.05).Radians;
 
-    private static readonly ConcurrentDictionary<ShadowModel, EclipseFinder> Finders = new();
-
     private readonly ApparentPlaceCalculator _accurate;
     private readonly ApparentPlaceCalculator _screening;
-    private readonly ConcurrentDictionary<long, LunarEclipse?> _byLunation = new();
-    private readonly ConcurrentDictionary<int, long> _firstMemberOfSeries = new();
+    private readonly int _maxParallelism;
+
+    // Per lunation, the solved passage without its Saros member (null: not eclipsed); what IsEclipsed reads.
+    private readonly ConcurrentDictionary<long, Lazy<EclipseSolution?>> _solved = new();
+
+    // Per lunation, the finished eclipse with its Saros member.
+    private readonly ConcurrentDictionary<long, Lazy<LunarEclipse?>> _eclipses = new();
+
+    // Per eclipsed lunation, the first member of the unbroken run of its Saros series that ends there. A pure function
+    // of the lunation, so a value written twice under a race is the same value.
+    private readonly ConcurrentDictionary<long, long> _firstMemberOfRun = new();
 
     /// <summary>A finder on the given ephemerides.</summary>
-    public EclipseFinder(ShadowModel model, ApparentPlaceCalculator accurate, ApparentPlaceCalculator screening)
+    /// <param name="model">The shadow model.</param>
+    /// <param name="accurate">The ephemeris the eclipses are solved on.</param>
+    /// <param name="screening">A cheaper ephemeris for screening full Moons (good to some 20″).</param>
+    /// <param name="maxParallelism">Most threads one range search uses (default: the processor count; 1 for none).</param>
+    public EclipseFinder(ShadowModel model, ApparentPlaceCalculator accurate, ApparentPlaceCalculator screening, int? maxParallelism = null)
     {
+        ArgumentOutOfRangeException.ThrowIfLessThan(maxParallelism ?? 1, 1, nameof(maxParallelism));
         Model = model;
         _accurate = accurate;
         _screening = screening;
+        _maxParallelism = maxParallelism ?? Environment.ProcessorCount;
     }
 
-    // Layer heights are the caller's choice; keep the finders (and their caches) of at most this many at once.
-    private const int MaxLayerFinders = 8;
+    /// <summary>A finder for a model on the embedded ephemerides (truncated series for screening).</summary>
+    public static EclipseFinder OnEmbeddedEphemerides(ShadowModel model, int? maxParallelism = null) =>
+        new(model, ApparentPlaceCalculator.Default, ApparentPlaceCalculator.Screening, maxParallelism);
 
-    /// <summary>The shared finder for a model, on the embedded ephemerides.</summary>
-    public static EclipseFinder For(ShadowModel model)
-    {
-        if (Finders.TryGetValue(model, out var known)) return known;
-        if (model.Kind == ShadowModelKind.Layer && Finders.Keys.Count(k => k.Kind == ShadowModelKind.Layer) >= MaxLayerFinders)
-        {
-            foreach (var stale in Finders.Keys.Where(k => k.Kind == ShadowModelKind.Layer && k.LayerHeightKm != ShadowModel.DefaultLayerHeightKm))
-                Finders.TryRemove(stale, out _);
-        }
-        return Finders.GetOrAdd(model, m =>
-            new EclipseFinder(m, ApparentPlaceCalculator.Default, new ApparentPlaceCalculator(LunarTheory.Screening, EarthOrbitTheory.Screening)));
-    }
+    /// <summary>The finder for a model from the process-wide default set, for use without dependency injection.</summary>
+    public static EclipseFinder For(ShadowModel model) => EclipseFinders.Shared.For(model);
 
     /// <summary>The shadow model.</summary>
     public ShadowModel Model { get; }
+
+    // How many exact passages this finder has computed (each lunation at most once): for tests of the cache.
+    private long _passagesComputed;
+
+    internal long PassagesComputed => Interlocked.Read(ref _passagesComputed);
 
     /// <summary>Every eclipse whose greatest eclipse falls in [from, to), in time order; stops when cancelled.</summary>
     public IEnumerable<LunarEclipse> Between(TtInstant from, TtInstant to, CancellationToken cancellationToken = default)
     {
         var first = MeanLunation.LastFullMoonAtOrBefore(from) - 1;
         var last = MeanLunation.LastFullMoonAtOrBefore(to) + 1;
-        for (var k = first; k <= last; k++)
+        for (var stepStart = first; stepStart <= last; stepStart += LunationsPerStep)
         {
+            var stepEnd = Math.Min(last, stepStart + LunationsPerStep - 1);
             cancellationToken.ThrowIfCancellationRequested();
-            var eclipse = AtLunation(k);
-            if (eclipse is not null && eclipse.GreatestEclipse >= from && eclipse.GreatestEclipse < to) yield return eclipse;
+            SolveInParallel(stepStart, stepEnd);
+            for (var k = stepStart; k <= stepEnd; k++)
+            {
+                cancellationToken.ThrowIfCancellationRequested();
+                var eclipse = AtLunation(k);
+                if (eclipse is not null && eclipse.GreatestEclipse >= from && eclipse.GreatestEclipse < to) yield return eclipse;
+            }
         }
     }
 
-    /// <summary>The eclipse at the full Moon of lunation k, or null when that full Moon is not eclipsed.</summary>
-    public LunarEclipse? AtLunation(long k) => _byLunation.GetOrAdd(k, Compute);
+    /// <summary>
+    /// Every eclipse whose greatest eclipse falls on the UTC calendar dates <paramref name="firstDate"/> to
+    /// <paramref name="lastDate"/> (both included), in time order.
+    /// </summary>
+    public IEnumerable<LunarEclipse> OnUtcDates(CalendarDate firstDate, CalendarDate lastDate, TimeScaleConverter time,
+        CancellationToken cancellationToken = default)
+    {
+        var startDay = firstDate.ToJulianDate().Day;
+        var endDay = lastDate.ToJulianDate().Day + 1;
+        // ΔT reaches about 13 hours at the ends of the span; search a day beyond each end, then keep by UTC.
+        foreach (var e in Between(TtInstant.FromJulianDate(startDay - 1), TtInstant.FromJulianDate(endDay + 1), cancellationToken))
+        {
+            var utc = time.ToUtc(e.GreatestEclipse).ToJulianDate();
+            if (utc >= startDay && utc < endDay) yield return e;
+        }
+    }
 
-    private LunarEclipse? Compute(long k)
+    /// <summary>The eclipse whose greatest eclipse falls on the given UTC calendar date, or null when there is none.</summary>
+    public LunarEclipse? OnUtcDate(CalendarDate date, TimeScaleConverter time) => OnUtcDates(date, date, time).FirstOrDefault();
+
+    /// <summary>The eclipse at the full Moon of lunation k, or null when that full Moon is not eclipsed.</summary>
+    public LunarEclipse? AtLunation(long k) => Once(_eclipses, k, WithSaros);
+
+    // The value for a key, computed by exactly one caller even under concurrent first requests (the others wait for it).
+    private static T? Once<T>(ConcurrentDictionary<long, Lazy<T?>> cache, long k, Func<long, T?> compute) where T : class =>
+        cache.GetOrAdd(k, key => new Lazy<T?>(() => compute(key), LazyThreadSafetyMode.ExecutionAndPublication)).Value;
+
+    // Solves the lunations of one step of a range on several threads; each is cached, so the ordered read that follows
+    // only collects them. The answers do not depend on the order: each lunation's result is a function of k alone.
+    private void SolveInParallel(long first, long last)
+    {
+        if (_maxParallelism <= 1 || last - first < 8) return;
+        Parallel.For(first, last + 1, new ParallelOptions { MaxDegreeOfParallelism = _maxParallelism }, k => AtLunation(k));
+    }
+
+    private EclipseSolution? Solved(long k) => Once(_solved, k, Compute);
+
+    private EclipseSolution? Compute(long k)
     {
         if (Screen(k) is not { } screen) return null;
+        Interlocked.Increment(ref _passagesComputed);
         var passage = ShadowPassage.Compute(_accurate, screen.Opposition);
         return Solve(k, passage);
     }
+
+    private LunarEclipse? WithSaros(long k) => Solved(k) is { } e
+        ? new LunarEclipse(k, e.Kind, e.GreatestEclipse, e.Gamma, e.PenumbralMagnitude, e.UmbralMagnitude, e.Contacts,
+            e.Durations, SarosOf(k), e.RadiiAtGreatest, e.MoonAtGreatest, Model, e.Passage)
+        : null;
+
+    // An eclipse as solved from its passage, before its Saros member is counted.
+    private sealed record EclipseSolution(long Lunation, EclipseKind Kind, TtInstant GreatestEclipse, double Gamma,
+        double PenumbralMagnitude, double UmbralMagnitude, IReadOnlyList<EclipseContact> Contacts, PhaseDurations Durations,
+        ShadowRadii RadiiAtGreatest, GeocentricMoonPlace MoonAtGreatest, ShadowPassage Passage);
 
     /// <summary>
     /// Whether the full Moon of lunation k is eclipsed. The least separation cannot exceed the separation at opposition,
@@ -86,9 +153,9 @@ public sealed class EclipseFinder
     /// </summary>
     internal bool IsEclipsed(long k)
     {
-        if (_byLunation.TryGetValue(k, out var known)) return known is not null;
+        if (_solved.TryGetValue(k, out var known) && known.IsValueCreated) return known.Value is not null;
         if (Screen(k) is not { } screen) return false;
-        return screen.ClearlyEclipsed || AtLunation(k) is not null;
+        return screen.ClearlyEclipsed || Solved(k) is not null;
     }
 
     // Screening: the opposition in longitude on the truncated series, and the separation there against the penumbra.
@@ -126,7 +193,7 @@ public sealed class EclipseFinder
         return (opposition, separation < reach - ScreeningMarginRadians);
     }
 
-    private LunarEclipse? Solve(long k, ShadowPassage passage)
+    private EclipseSolution? Solve(long k, ShadowPassage passage)
     {
         var half = passage.HalfWidthHours;
         const double toleranceHours = 1e-6;
@@ -136,9 +203,9 @@ public sealed class EclipseFinder
         var radii = ShadowCrossSection.RadiiTowardMoon(Model, g);
         var moonRadius = g.MoonSemiDiameter.Radians;
         var separation = g.Separation.Radians;
-        var penumbralMagnitude = (radii.Penumbra.Radians + moonRadius - separation) / (2 * moonRadius);
+        var penumbralMagnitude = ShadowCrossSection.Magnitude(radii.Penumbra.Radians, moonRadius, separation);
         if (penumbralMagnitude <= 0) return null;
-        var umbralMagnitude = (radii.Umbra.Radians + moonRadius - separation) / (2 * moonRadius);
+        var umbralMagnitude = ShadowCrossSection.Magnitude(radii.Umbra.Radians, moonRadius, separation);
 
         var contacts = new List<EclipseContact>(6);
         void AddPair(ContactName before, ContactName after, Func<ShadowGeometry, double> reach, bool internalContact)
@@ -182,27 +249,31 @@ public sealed class EclipseFinder
 
         var moonDirection = passage.MoonDirectionOfDate(greatest);
         var moonPlace = new GeocentricMoonPlace(moonDirection.Longitude, moonDirection.Latitude, g.MoonDistanceKm, g.MoonSemiDiameter);
-        return new LunarEclipse(k, kind, passage.InstantAt(greatest), g.DistanceFromAxisInEarthRadii, penumbralMagnitude, umbralMagnitude,
-            contacts, durations, SarosOf(k), radii, moonPlace, Model, passage);
+        return new EclipseSolution(k, kind, passage.InstantAt(greatest), g.DistanceFromAxisInEarthRadii, penumbralMagnitude, umbralMagnitude,
+            contacts, durations, radii, moonPlace, passage);
     }
 
-    // The member index counts back along the series (223 lunations a step) to its first eclipse under this model.
-    private SarosMember SarosOf(long k)
+    // The member index counts back along the series (223 lunations a step) to the first eclipse of its unbroken run
+    // under this model. Reads only the solved passages, never the finished eclipses, so it cannot re-enter AtLunation.
+    private SarosMember SarosOf(long k) =>
+        new(SarosNumbering.SeriesOf(k), (int)((k - FirstMemberOfRun(k)) / SarosLunations) + 1);
+
+    private long FirstMemberOfRun(long k)
     {
-        var series = SarosNumbering.SeriesOf(k);
-        var first = _firstMemberOfSeries.GetOrAdd(series, _ =>
+        var walked = new List<long>();
+        var member = k;
+        long first;
+        while (!_firstMemberOfRun.TryGetValue(member, out first))
         {
-            var member = k;
-            while (IsEclipsed(member - 223)) member -= 223;
-            return member;
-        });
-        if (first > k)
-        {
-            // Found from a later member before an earlier one was known: extend backwards.
-            var member = k;
-            while (IsEclipsed(member - 223)) member -= 223;
-            first = _firstMemberOfSeries.AddOrUpdate(series, member, (_, old) => Math.Min(old, member));
+            walked.Add(member);
+            if (!IsEclipsed(member - SarosLunations))
+            {
+                first = member;
+                break;
+            }
+            member -= SarosLunations;
         }
-        return new SarosMember(series, (int)((k - first) / 223) + 1);
+        foreach (var m in walked) _firstMemberOfRun.TryAdd(m, first);
+        return first;
     }
 }

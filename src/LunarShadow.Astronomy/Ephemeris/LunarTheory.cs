@@ -10,7 +10,6 @@ namespace LunarShadow.Astronomy.Ephemeris;
 /// </summary>
 public sealed class LunarTheory
 {
-    private const double ArcsecondsToRadians = Math.PI / (180.0 * 3600.0);
     private readonly double[] _meanLongitude;
     private readonly PolynomialPhaseSeries _longitude, _latitude, _distance;
 
@@ -53,10 +52,10 @@ public sealed class LunarTheory
         var (l, lRate) = _longitude.Evaluate(t);
         var (b, bRate) = _latitude.Evaluate(t);
         var (r, rRate) = _distance.Evaluate(t);
-        var v = w1 + l * ArcsecondsToRadians;
-        var vRate = w1Rate + lRate * ArcsecondsToRadians;
-        var u = b * ArcsecondsToRadians;
-        var uRate = bRate * ArcsecondsToRadians;
+        var v = w1 + l * Angle.RadiansPerArcsecond;
+        var vRate = w1Rate + lRate * Angle.RadiansPerArcsecond;
+        var u = b * Angle.RadiansPerArcsecond;
+        var uRate = bRate * Angle.RadiansPerArcsecond;
 
         var (sinV, cosV) = Math.SinCos(v);
         var (sinU, cosU) = Math.SinCos(u);

@@ -14,6 +14,12 @@ public sealed class ApparentPlaceCalculator(LunarTheory moon, EarthOrbitTheory e
     /// <summary>The calculator on the embedded series (truncated ELP/MPP02, full VSOP87B).</summary>
     public static ApparentPlaceCalculator Default { get; } = new(LunarTheory.Truncated, EarthOrbitTheory.Vsop87B);
 
+    private static readonly Lazy<ApparentPlaceCalculator> ScreeningCalculator =
+        new(() => new ApparentPlaceCalculator(LunarTheory.Screening, EarthOrbitTheory.Screening));
+
+    /// <summary>The calculator on the screening series (good to some 20″), for cheap first looks such as eclipse screening.</summary>
+    public static ApparentPlaceCalculator Screening => ScreeningCalculator.Value;
+
     private static readonly RotationMatrix EclipticToEquatorJ2000 = RotationMatrix.AboutX(-VondrakPrecession.ObliquityAtJ2000.Radians);
 
     /// <summary>
@@ -69,7 +75,7 @@ public sealed class ApparentPlaceCalculator(LunarTheory moon, EarthOrbitTheory e
         var distance = topocentric.Length;
         var hourAngle = (greenwichApparentSiderealTime + site.Longitude - rightAscension).NormalizedSigned();
         var horizontal = HorizontalCoordinates.FromHourAngle(hourAngle, declination, site.Latitude);
-        var semiDiameter = Angle.FromRadians(Math.Asin(Math.Sin(body.SemiDiameter.Radians) * body.DistanceKm / distance));
+        var semiDiameter = BodyDisc.AtDistance(body.SemiDiameter, body.DistanceKm, distance);
         return new TopocentricPlace(
             rightAscension, declination, distance, hourAngle,
             horizontal.Altitude, AtmosphericRefraction.Apply(horizontal.Altitude, air), horizontal.Azimuth, semiDiameter);

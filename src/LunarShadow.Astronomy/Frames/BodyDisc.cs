@@ -20,6 +20,11 @@ public static class BodyDisc
     public static Angle MoonSemiDiameter(double distanceKm) =>
         Angle.FromRadians(Math.Asin(MoonRadiusRatio * GeodeticLocation.EquatorialRadiusKm / distanceKm));
 
+    // Meeus (1998), ch. 40 (topocentric semi-diameter): sin s′ = sin s · Δ / Δ′ for a spherical body.
+    /// <summary>The semi-diameter of a body seen at another distance, from its semi-diameter at a known one.</summary>
+    public static Angle AtDistance(Angle semiDiameter, double distanceKm, double newDistanceKm) =>
+        Angle.FromRadians(Math.Asin(Math.Sin(semiDiameter.Radians) * distanceKm / newDistanceKm));
+
     // Meeus (1998), ch. 55: s = 959.63″ / Δ(AU).
     /// <summary>The Sun's semi-diameter at a distance.</summary>
     public static Angle SunSemiDiameter(double distanceKm) =>

@@ -6,7 +6,6 @@ namespace LunarShadow.Astronomy.Frames;
 /// <summary>The Earth's rotation: Earth rotation angle and Greenwich sidereal time (IAU 2006).</summary>
 public static class EarthRotation
 {
-    private const double ArcsecondsToRadians = Math.PI / (180.0 * 3600.0);
 
     // IERS Conventions (2010), eq. 5.15 (Capitaine et al. 2000): θ = 2π(0.7790572732640 + 1.00273781191135448·Du).
     /// <summary>The Earth rotation angle at an instant of UT1.</summary>
@@ -31,7 +30,7 @@ public static class EarthRotation
     public static Angle EquationOfEquinoxes(TtInstant tt, Nutation nutation, Angle meanObliquity)
     {
         var omega = NutationIau2000B.MoonNodeRadians(tt.JulianCenturiesSinceJ2000);
-        var complementary = (0.00264096 * Math.Sin(omega) + 0.00006352 * Math.Sin(2 * omega)) * ArcsecondsToRadians;
+        var complementary = (0.00264096 * Math.Sin(omega) + 0.00006352 * Math.Sin(2 * omega)) * Angle.RadiansPerArcsecond;
         return Angle.FromRadians(nutation.InLongitude.Radians * Math.Cos(meanObliquity.Radians) + complementary);
     }
 

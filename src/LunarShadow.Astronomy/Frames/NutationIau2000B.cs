@@ -6,8 +6,7 @@ namespace LunarShadow.Astronomy.Frames;
 /// <summary>The IAU 2000B nutation model (McCarthy &amp; Luzum 2003, Celest. Mech. Dyn. Astron. 85, 37): 77 luni-solar terms.</summary>
 public static class NutationIau2000B
 {
-    private const double ArcsecondsToRadians = Math.PI / (180.0 * 3600.0);
-    private const double TenthMicroarcsecondsToRadians = ArcsecondsToRadians / 1e7;
+    private const double TenthMicroarcsecondsToRadians = Angle.RadiansPerArcsecond / 1e7;
     private const double FullCircleArcseconds = 1296000.0;
 
     // McCarthy & Luzum (2003), Table 1: multipliers of l, l′, F, D, Ω; then longitude sin, t·sin, cos and
@@ -95,8 +94,8 @@ public static class NutationIau2000B
 
     // McCarthy & Luzum (2003): fixed offsets in lieu of the planetary terms, −0.135 mas and +0.388 mas
     // (the values for applying frame bias, precession and nutation separately).
-    private static readonly double PlanetaryOffsetLongitude = -0.135e-3 * ArcsecondsToRadians;
-    private static readonly double PlanetaryOffsetObliquity = 0.388e-3 * ArcsecondsToRadians;
+    private static readonly double PlanetaryOffsetLongitude = -0.135e-3 * Angle.RadiansPerArcsecond;
+    private static readonly double PlanetaryOffsetObliquity = 0.388e-3 * Angle.RadiansPerArcsecond;
 
     // McCarthy & Luzum (2003), eq. 2 / Simon et al. (1994): the Delaunay arguments, linear in t, as IAU 2000B uses them.
     /// <summary>Δψ and Δε at an instant of TT.</summary>
@@ -124,5 +123,5 @@ public static class NutationIau2000B
     /// <summary>The mean longitude of the Moon's ascending node Ω (Simon et al. 1994), for the equation of the equinoxes.</summary>
     internal static double MoonNodeRadians(double t) => Arcseconds(450160.398036 - 6962890.5431 * t);
 
-    private static double Arcseconds(double value) => Math.IEEERemainder(value, FullCircleArcseconds) * ArcsecondsToRadians;
+    private static double Arcseconds(double value) => Math.IEEERemainder(value, FullCircleArcseconds) * Angle.RadiansPerArcsecond;
 }

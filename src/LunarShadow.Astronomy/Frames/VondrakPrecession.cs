@@ -9,7 +9,6 @@ namespace LunarShadow.Astronomy.Frames;
 /// </summary>
 public static class VondrakPrecession
 {
-    private const double ArcsecondsToRadians = Math.PI / (180.0 * 3600.0);
 
     /// <summary>The IAU 2006 obliquity of the ecliptic at J2000.0, 84381.406″.</summary>
     public static Angle ObliquityAtJ2000 { get; } = Angle.FromArcseconds(84381.406);
@@ -105,6 +104,6 @@ public static class VondrakPrecession
             a += first[i] * power;
             b += second[i] * power;
         }
-        return (a * ArcsecondsToRadians, b * ArcsecondsToRadians);
+        return (a * Angle.RadiansPerArcsecond, b * Angle.RadiansPerArcsecond);
     }
 }

@@ -12,6 +12,12 @@ public static class ShadowCrossSection
     /// <summary>The radii in the direction of the Moon's centre (which matters only for the elliptical layer model).</summary>
     public static ShadowRadii RadiiTowardMoon(ShadowModel model, ShadowGeometry g) => Radii(model, g, g.DirectionFromAxis);
 
+    // Meeus (1998), ch. 54 (magnitudes of a lunar eclipse): m = (ρ + s − d) / (2s), the fraction of the Moon's
+    // diameter inside a shadow of radius ρ, with s the Moon's semi-diameter and d its centre's distance from the axis.
+    /// <summary>The magnitude of the Moon in a shadow of the given radius (negative when outside it), all in radians.</summary>
+    public static double Magnitude(double shadowRadiusRadians, double moonSemiDiameterRadians, double separationRadians) =>
+        (shadowRadiusRadians + moonSemiDiameterRadians - separationRadians) / (2 * moonSemiDiameterRadians);
+
     /// <summary>The radii in a given direction from the axis (position angle from north through east).</summary>
     public static ShadowRadii Radii(ShadowModel model, ShadowGeometry g, Angle direction)
     {

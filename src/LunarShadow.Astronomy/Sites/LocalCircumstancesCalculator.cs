@@ -53,9 +53,7 @@ public static class LocalCircumstancesCalculator
         AddPhase(EclipsePhase.Total, ContactName.U2, ContactName.U3);
 
         var contacts = new List<LocalContact>();
-        foreach (var c in eclipse.Contacts.Where(c => c.Name <= ContactName.U2)) contacts.Add(Contact(c.Name, c.Tt, c.PositionAngle));
-        contacts.Add(Contact(null, eclipse.GreatestEclipse, null));
-        foreach (var c in eclipse.Contacts.Where(c => c.Name >= ContactName.U3)) contacts.Add(Contact(c.Name, c.Tt, c.PositionAngle));
+        foreach (var m in eclipse.Moments) contacts.Add(Contact(m.Contact, m.Tt, m.PositionAngle));
 
         var best = LargestVisibleMagnitude(eclipse, sky, phases, toUtc);
         return new LocalCircumstances(site, eclipse, deltaT, contacts, events, horizonState, phases, best);
@@ -109,7 +107,7 @@ public static class LocalCircumstancesCalculator
         var g = passage.At(passage.HoursFromCenter(tt));
         var radii = ShadowCrossSection.RadiiTowardMoon(eclipse.Model, g);
         var s = g.MoonSemiDiameter.Radians;
-        var magnitude = tt == greatest ? eclipse.UmbralMagnitude : (radii.Umbra.Radians + s - g.Separation.Radians) / (2 * s);
+        var magnitude = tt == greatest ? eclipse.UmbralMagnitude : ShadowCrossSection.Magnitude(radii.Umbra.Radians, s, g.Separation.Radians);
         var altitude = sky.MoonAt(sky.Night.HoursFromCenter(tt)).ApparentAltitude;
         return new MaxVisibleMagnitude(magnitude, tt, toUtc(tt), altitude);
     }

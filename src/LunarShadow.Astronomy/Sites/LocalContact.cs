@@ -18,7 +18,7 @@ public sealed record LocalContact(
     ContactName? Name, TtInstant Tt, Instant Utc, LocalMoon Moon, bool Visible, Angle SunAltitude, SkyState Sky, Angle? ZenithPositionAngle)
 {
     /// <summary>P1…P4, or "greatest".</summary>
-    public string Label => Name?.ToString() ?? "greatest";
+    public string Label => Name?.ToString() ?? EclipseMoment.GreatestLabel;
 }
 
 /// <summary>The largest umbral magnitude the site sees.</summary>

@@ -52,9 +52,9 @@ public sealed class LocalSky
         var gast = SiderealTime(hours);
         var moon = _night.MoonKm(hours);
         var (horizontal, distance, topocentricTrueOfDate) = Horizontal(moon, gast);
-        var semiDiameter = Math.Asin(BodyDisc.MoonRadiusRatio * GeodeticLocation.EquatorialRadiusKm / distance);
+        var semiDiameter = BodyDisc.MoonSemiDiameter(distance);
         var trueAltitude = Angle.FromRadians(horizontal.Altitude);
-        var limbTrue = trueAltitude + Angle.FromRadians(semiDiameter);
+        var limbTrue = trueAltitude + semiDiameter;
 
         // Meeus (1998), eq. 14.1: the parallactic angle q from the hour angle, declination and latitude.
         var declination = topocentricTrueOfDate.Latitude.Radians;
@@ -68,7 +68,7 @@ public sealed class LocalSky
             AtmosphericRefraction.Apply(limbTrue, _site.Air),
             Angle.FromRadians(horizontal.Azimuth).NormalizedPositive(),
             Angle.FromRadians(q).NormalizedPositive(),
-            Angle.FromRadians(semiDiameter));
+            semiDiameter);
     }
 
     /// <summary>
@@ -78,8 +78,7 @@ public sealed class LocalSky
     public (double UpperLimbAltitude, double Azimuth) MoonLimbAt(double hours)
     {
         var (horizontal, distance, _) = Horizontal(_night.MoonKm(hours), SiderealTime(hours));
-        var semiDiameter = BodyDisc.MoonRadiusRatio * GeodeticLocation.EquatorialRadiusKm / distance;
-        var limbTrue = Angle.FromRadians(horizontal.Altitude + semiDiameter);
+        var limbTrue = Angle.FromRadians(horizontal.Altitude) + BodyDisc.MoonSemiDiameter(distance);
         return (AtmosphericRefraction.Apply(limbTrue, _site.Air).Radians, horizontal.Azimuth);
     }
 

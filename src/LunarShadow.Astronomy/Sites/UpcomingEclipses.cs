@@ -30,7 +30,7 @@ public static class UpcomingEclipses
     /// <summary>The longest look-ahead, in years.</summary>
     public const int MaxYearsAhead = 1000;
 
-    private static readonly Angle AstronomicalNightSun = Angle.FromDegrees(-18);
+    private static readonly Angle AstronomicalNightSun = SkyStates.AstronomicalTwilightEndAltitude;
 
     /// <summary>Eclipses from <paramref name="from"/> on that the site can see, lazily, in time order; stops when cancelled.</summary>
     public static IEnumerable<UpcomingEclipse> From(EclipseFinder finder, Site site, TimeScaleConverter time, TtInstant from, UpcomingCriteria criteria,

@@ -30,17 +30,14 @@ public static class VisibilityMap
     public const double ResolutionDegrees = 1.0;
 
     // Common practice (Meeus 1998, ch. 15): the Moon's upper limb is on the horizon when its geocentric altitude is
-    // π − s − 34′ (parallax, semi-diameter, standard refraction).
-    private static readonly double StandardRefraction = Angle.FromDegrees(34.0 / 60).Radians;
+    // π − s − R₀ (parallax, semi-diameter, refraction at the horizon in standard air: the library's own, about 34′).
+    private static readonly double StandardRefraction = AtmosphericRefraction.FromApparentAltitude(Angle.Zero, AirConditions.Standard).Radians;
 
     /// <summary>The regions of an eclipse; UT1 = TT − ΔT places the Earth's rotation.</summary>
     public static IReadOnlyList<VisibilityRegion> Compute(LunarEclipse eclipse, double deltaTSeconds)
     {
         var night = eclipse.NightSky;
-        var instants = eclipse.Contacts.Where(c => c.Name <= ContactName.U2).Select(c => (Name: c.Name.ToString(), c.Tt))
-            .Append((Name: "greatest", Tt: eclipse.GreatestEclipse))
-            .Concat(eclipse.Contacts.Where(c => c.Name >= ContactName.U3).Select(c => (Name: c.Name.ToString(), c.Tt)))
-            .ToList();
+        var instants = eclipse.Moments.Select(m => (Name: m.Label, m.Tt)).ToList();
         var grids = instants.ToDictionary(i => i.Name, i => Grid(night, i.Tt, deltaTSeconds));
         var regions = instants.Select(i => new VisibilityRegion(i.Name, i.Tt, Boxes(grids[i.Name]))).ToList();
         regions.Add(new VisibilityRegion("whole-eclipse", null, Boxes(And(grids["P1"], grids["P4"]))));
@@ -56,8 +53,8 @@ public static class VisibilityMap
         var earthFixed = (RotationMatrix.AboutZ(gast.Radians) * moon);
         var distance = earthFixed.Length;
         var direction = earthFixed / distance;
-        var parallax = Math.Asin(GeodeticLocation.EquatorialRadiusKm / distance);
-        var semiDiameter = Math.Asin(BodyDisc.MoonRadiusRatio * Math.Sin(parallax));
+        var parallax = BodyDisc.HorizontalParallax(distance).Radians;
+        var semiDiameter = BodyDisc.MoonSemiDiameter(distance).Radians;
         var threshold = Math.Sin(parallax - semiDiameter - StandardRefraction);
         var rows = (int)(180 / ResolutionDegrees);
         var columns = (int)(360 / ResolutionDegrees);

@@ -13,6 +13,9 @@ public readonly record struct CalendarDate(int Year, int Month, double Day, bool
     /// <summary>The whole day of the month.</summary>
     public int DayOfMonth => (int)Math.Floor(Day);
 
+    /// <summary>The Julian date of this date's start (its day fraction included), in its own calendar (Meeus 1998, eq. 7.1).</summary>
+    public JulianDate ToJulianDate() => JulianDate.FromCalendar(Year, Month, Day, IsGregorian);
+
     /// <summary>The date as YYYY-MM-DD, with a minus sign and at least four digits for negative years.</summary>
     public string ToIsoDateString() => Year < 0
         ? FormattableString.Invariant($"-{-Year:0000}-{Month:00}-{DayOfMonth:00}")

@@ -8,6 +8,9 @@ public readonly record struct Angle : IComparable<Angle>
 {
     private const double DegreesPerRadian = 180.0 / Math.PI;
 
+    /// <summary>Radians in one arc-second, π / 648000: the one conversion the series and models scale by.</summary>
+    public const double RadiansPerArcsecond = Math.PI / (180.0 * 3600.0);
+
     private Angle(double radians) => Radians = radians;
 
     /// <summary>The angle in radians.</summary>

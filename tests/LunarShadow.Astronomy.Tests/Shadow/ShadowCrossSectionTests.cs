@@ -78,4 +78,17 @@ public class ShadowCrossSectionTests
         var south = new ShadowGeometry(0, -0.004, 384_400, 149_597_870.7, 0);
         Assert.Equal(-Math.Sin(Math.Atan(0.004)) * 384_400 / GeodeticLocation.EquatorialRadiusKm, south.DistanceFromAxisInEarthRadii, 12);
     }
+
+    // Meeus (1998), ch. 54: magnitude (ρ + s − d)/(2s): 1 when the Moon's far limb touches the shadow's edge from inside
+    // (d = ρ − s), 0 when its near limb touches it from outside (d = ρ + s), negative beyond.
+    [Theory]
+    [InlineData(0.0123, 0.0045)]
+    [InlineData(0.0070, 0.0047)]
+    public void Magnitude_is_the_fraction_of_the_Moon_diameter_inside_the_shadow(double rho, double s)
+    {
+        Assert.Equal(1.0, ShadowCrossSection.Magnitude(rho, s, rho - s), 12);
+        Assert.Equal(0.0, ShadowCrossSection.Magnitude(rho, s, rho + s), 12);
+        Assert.Equal(0.5, ShadowCrossSection.Magnitude(rho, s, rho), 12);
+        Assert.True(ShadowCrossSection.Magnitude(rho, s, rho + 2 * s) < 0);
+    }
 }
