@@ -33,8 +33,9 @@ internal static class ServiceRegistration
             options.SizeLimit = 256L * 1024 * 1024;
         });
         builder.Services.AddProblemDetails();
-        // Numbers are written and read as JSON numbers only, so the OpenAPI schema shows them as such.
-        builder.Services.ConfigureHttpJsonOptions(options => options.SerializerOptions.NumberHandling = JsonNumberHandling.Strict);
+        // Numbers are written and read as JSON numbers only, so the OpenAPI schema shows them as such; a NaN or an
+        // infinity throws rather than becoming null.
+        builder.Services.ConfigureHttpJsonOptions(options => Formatting.FiniteNumbers.Configure(options.SerializerOptions));
         builder.Services.AddOpenApi("v1", options => options.AddSchemaTransformer<TimeSchemaTransformer>().AddDocumentTransformer((document, _, _) =>
         {
             document.Info.Title = "LunarShadow";

@@ -15,7 +15,9 @@ internal sealed record PhotoParameters(
     [property: FromQuery(Name = "name"), Description(Validation.SiteQuery.NameDescription)] string? Name,
     [property: FromQuery(Name = "iso"), Description("ISO speed, 25 to 409600 (default 400); ignored when shutter is given.")] string? Iso,
     [property: FromQuery(Name = "aperture"), Description("Lens f-number, 0.95 to 64 (default 8).")] string? Aperture,
-    [property: FromQuery(Name = "shutter"), Description("A fixed shutter time in seconds, 1/8000 to 3600: the ISO is then computed.")] string? Shutter,
+    [property: FromQuery(Name = "shutter"), Description("A fixed shutter time in seconds, 1/8000 to 3600 and within fastestShutter to slowestShutter: the ISO is then computed.")] string? Shutter,
+    [property: FromQuery(Name = "fastestShutter"), Description("The camera's fastest shutter in seconds, 1/64000 to 1 (default 1/8000 = 0.000125); faster exposures are avoided by closing the aperture and lowering the ISO.")] string? FastestShutter,
+    [property: FromQuery(Name = "slowestShutter"), Description("The camera's slowest timed shutter in seconds, up to 3600 (default 30); longer exposures are avoided by raising the ISO.")] string? SlowestShutter,
     [property: FromQuery(Name = "focalLength"), Description("Lens focal length in mm, above 0 up to 10000 (default 400).")] string? FocalLength,
     [property: FromQuery(Name = "teleconverter"), Description("Teleconverter or crop factor multiplying the focal length, 1 to 4 (default 1).")] string? Teleconverter,
     [property: FromQuery(Name = "sensor"), Description("Sensor size in mm, WIDTHxHEIGHT, each 1 to 100 (default 36x24).")] string? Sensor,
@@ -36,7 +38,7 @@ internal sealed record PhotoParameters(
     public string? this[string name] => name switch
     {
         "lat" => Lat, "lon" => Lon, "elevation" => Elevation, "tz" => Tz, "minAltitude" => MinAltitude, "horizon" => Horizon,
-        "name" => Name, "iso" => Iso, "aperture" => Aperture, "shutter" => Shutter, "focalLength" => FocalLength,
+        "name" => Name, "iso" => Iso, "aperture" => Aperture, "shutter" => Shutter, "fastestShutter" => FastestShutter, "slowestShutter" => SlowestShutter, "focalLength" => FocalLength,
         "teleconverter" => Teleconverter, "sensor" => Sensor, "pixelPitch" => PixelPitch, "pixels" => Pixels, "mount" => Mount,
         "danjon" => Danjon, "interval" => Interval, "bracket" => Bracket, "blur" => Blur, "extinction" => Extinction, "gap" => Gap,
         "timelapseInterval" => TimelapseInterval, "fileSize" => FileSize, "start" => Start,
@@ -46,7 +48,7 @@ internal sealed record PhotoParameters(
     /// <summary>Every field name.</summary>
     public static IReadOnlyList<string> Names { get; } =
     [
-        "lat", "lon", "elevation", "tz", "minAltitude", "horizon", "name", "iso", "aperture", "shutter", "focalLength", "teleconverter",
+        "lat", "lon", "elevation", "tz", "minAltitude", "horizon", "name", "iso", "aperture", "shutter", "fastestShutter", "slowestShutter", "focalLength", "teleconverter",
         "sensor", "pixelPitch", "pixels", "mount", "danjon", "interval", "bracket", "blur", "extinction", "gap", "timelapseInterval", "fileSize", "start",
     ];
 }

@@ -16,6 +16,11 @@ internal static class PhotoRequest
         var iso = reader.Number("iso", field("iso"), ExposureCalculator.MinIso, ExposureCalculator.MaxIso, "ISO") ?? 400;
         var aperture = reader.Number("aperture", field("aperture"), 0.95, 64, "f-number") ?? 8;
         var shutter = reader.Number("shutter", field("shutter"), 1.0 / 8000, 3600, "seconds");
+        var fastest = reader.Number("fastestShutter", field("fastestShutter"), 1.0 / 64000, 1, "seconds") ?? Camera.DefaultFastestShutterSeconds;
+        var slowest = reader.Number("slowestShutter", field("slowestShutter"), 1.0 / 64000, 3600, "seconds") ?? Camera.DefaultSlowestShutterSeconds;
+        if (slowest < fastest) reader.Fail("slowestShutter", "slowestShutter must be at least fastestShutter.");
+        else if (shutter is { } t && (t < fastest || t > slowest))
+            reader.Fail("shutter", FormattableString.Invariant($"shutter must lie within the camera's range, fastestShutter {fastest:0.######} s to slowestShutter {slowest:0.###} s; got {t:0.######} s."));
         var focal = reader.Number("focalLength", field("focalLength"), 0, 10000, "mm") ?? 400;
         if (focal <= 0) reader.Fail("focalLength", "focalLength must be above 0 mm (up to 10000).");
         var multiplier = reader.Number("teleconverter", field("teleconverter"), 1, 4, "×") ?? 1;
@@ -37,7 +42,7 @@ internal static class PhotoRequest
 
         var pixelPitch = pitch ?? width / (pixels ?? 6000) * 1000;
         var mount = mountName switch { "sidereal" => Mount.SiderealTracking, "lunar" => Mount.LunarTracking, _ => Mount.FixedTripod };
-        var camera = new Camera(width, height, pixelPitch, focal, multiplier, mount, iso, aperture, shutter);
+        var camera = new Camera(width, height, pixelPitch, focal, multiplier, mount, iso, aperture, shutter, fastest, slowest);
         var settings = new PhotoSettings(danjon, interval, (int)bracket, blur, extinction, gap, lapse, fileSize,
             start is { } s ? time.ToTerrestrialTime(s) : null);
         return (site, camera, settings);
