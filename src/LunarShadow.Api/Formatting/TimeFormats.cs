@@ -15,7 +15,17 @@ internal static partial class TimeFormats
     private static readonly double UnixEpochJulianDate = 2440587.5;
 
     /// <summary>A UTC instant, e.g. 2025-03-14T06:58:00.000Z or -1999-06-26T13:00:00.000Z.</summary>
-    public static string Utc(Instant instant) => Write(instant.ToJulianDate(), "Z");
+    public static string Utc(Instant instant) => Write(ToMillisecond(instant).ToJulianDate(), "Z");
+
+    /// <summary>
+    /// The instant rounded to the millisecond (half away from zero) in whole ticks: UTC and local times are both written
+    /// from it, so they always agree to the millisecond.
+    /// </summary>
+    public static Instant ToMillisecond(Instant instant)
+    {
+        var ms = Math.DivRem(instant.ToUnixTimeTicks(), 10_000, out var rest);
+        return Instant.FromUnixTimeMilliseconds(rest >= 5_000 ? ms + 1 : rest <= -5_000 ? ms - 1 : ms);
+    }
 
     /// <summary>A TT instant without a zone, e.g. 2025-03-14T06:59:09.184.</summary>
     public static string Tt(TtInstant tt) => Write(tt.JulianDate.Day, "");
@@ -26,11 +36,15 @@ internal static partial class TimeFormats
     /// </summary>
     public static (string Text, string? Note) Local(Instant instant, DateTimeZone zone)
     {
+        instant = ToMillisecond(instant);
         var offset = zone.GetUtcOffset(instant);
-        var seconds = offset.Seconds;
+        // ISO 8601 offsets carry whole minutes: a local mean time offset such as +00:13:35 (zones before standard time)
+        // is written rounded to the minute, and the wall time is computed with the offset written, so the text always
+        // names the same instant as the UTC.
+        var seconds = (int)Math.Round(offset.Seconds / 60.0, MidpointRounding.AwayFromZero) * 60;
         var sign = seconds < 0 ? '-' : '+';
         var abs = Math.Abs(seconds);
-        var text = Write(instant.ToJulianDate() + seconds / 86400.0, string.Create(CultureInfo.InvariantCulture, $"{sign}{abs / 3600:00}:{abs / 60 % 60:00}"));
+        var text = Write(instant.Plus(Duration.FromSeconds(seconds)).ToJulianDate(), string.Create(CultureInfo.InvariantCulture, $"{sign}{abs / 3600:00}:{abs / 60 % 60:00}"));
         string? note = null;
         if (zone != DateTimeZone.Utc && zone.MapLocal(instant.InZone(zone).LocalDateTime).Count > 1)
             note = string.Create(CultureInfo.InvariantCulture, $"This local time occurs twice (clocks go back); the one at UTC{sign}{abs / 3600:00}:{abs / 60 % 60:00} is meant.");

@@ -75,14 +75,7 @@ internal static class UpcomingEndpoints
                 return u;
             })
             .Take(wanted).ToList();
-        var items = found.Select(u =>
-        {
-            var full = LocalMapping.ToResponse(u.Local, time, null);
-            var greatest = time.ToUtc(u.Local.Eclipse.GreatestEclipse);
-            return new UpcomingItem(full.Eclipse.Date, full.Eclipse.Kind, TimeFormats.Utc(greatest), TimeFormats.Local(greatest, site.TimeZone).Text,
-                TimeFormats.Round(u.QualifyingMinutes, 2), u.Qualifying.Select(q => LocalMapping.Phase(q, site.TimeZone)).ToList(),
-                full.MaxVisibleUmbralMagnitude, full.Summary);
-        }).ToList();
+        var items = found.Select(u => Item(u, site, time)).ToList();
         var note = items.Count < wanted
             ? $"Only {items.Count} such eclipses in the {UpcomingEclipses.MaxYearsAhead} years searched (or up to the year {SupportedRange.LastYear})."
             : null;
@@ -98,13 +91,22 @@ internal static class UpcomingEndpoints
         };
     }
 
+    internal static UpcomingItem Item(UpcomingEclipse u, Site site, TimeScaleConverter time)
+    {
+        var full = LocalMapping.ToResponse(u.Local, time, null);
+        var greatest = time.ToUtc(u.Local.Eclipse.GreatestEclipse);
+        return new UpcomingItem(full.Eclipse.Date, full.Eclipse.Kind, TimeFormats.Utc(greatest), TimeFormats.Local(greatest, site.TimeZone).Text,
+            TimeFormats.Round(u.QualifyingMinutes, 2), u.Qualifying.Select(q => LocalMapping.Phase(q, site.TimeZone)).ToList(),
+            full.MaxVisibleUmbralMagnitude, full.Summary);
+    }
+
     private static CalendarDate? Today(IClock clock)
     {
         var today = clock.GetCurrentInstant().InUtc().Date;
         return new CalendarDate(today.Year, today.Month, today.Day, true);
     }
 
-    private static string Csv(IEnumerable<UpcomingItem> items)
+    internal static string Csv(IEnumerable<UpcomingItem> items)
     {
         var csv = new CsvWriter().Row("date", "kind", "greatest_utc", "greatest_local", "qualifying_minutes", "first_qualifying_utc", "last_qualifying_utc", "max_visible_umbral_magnitude", "summary");
         foreach (var i in items)
@@ -114,7 +116,7 @@ internal static class UpcomingEndpoints
     }
 
     // A subscription feed: one event per eclipse, spanning its qualifying stretches, with an alarm.
-    private static IResult Calendar(List<UpcomingEclipse> found, Site site, TimeScaleConverter time, QueryReader reader)
+    internal static IResult Calendar(List<UpcomingEclipse> found, Site site, TimeScaleConverter time, QueryReader reader)
     {
         if (found.Any(u => u.Qualifying.Any(q => !ICalendarWriter.CanWrite(q.StartUtc))))
         {
