@@ -21,7 +21,7 @@ internal static class SiteQuery
     public const string TemperatureDescription = "Air temperature in °C for refraction, −90 to 60 (default 10).";
     public const string TimeZoneDescription = "IANA time zone of the site, e.g. Europe/Vienna (tzdb as carried by NodaTime); default UTC.";
     public const string MinAltitudeDescription = "Lowest useful altitude of the Moon's upper limb in degrees, −5 to 60 (default 0).";
-    public const string HorizonDescription = "Local horizon profile: azimuth:altitude pairs in degrees, comma-separated, e.g. 90:5,180:12,270:3 (azimuth 0–360 from north through east, altitude −5 to 90; up to 360 points; linear between them).";
+    public const string HorizonDescription = "Local horizon profile: azimuth:altitude pairs in degrees, comma-separated, e.g. 90:5,180:12,270:3 (azimuth 0–360 from north through east, altitude −5 to 90; up to 360 points; linear between them); or sea for a flat sea horizon lowered by the dip for the site's elevation. Without it, rise and set follow the almanac convention: the upper limb at 0° with refraction, no dip.";
     public const string NameDescription = "A free-text name for the site, up to 200 characters, echoed back.";
 
     /// <summary>Maximum number of horizon-profile points.</summary>
@@ -40,11 +40,12 @@ internal static class SiteQuery
         var temperature = reader.Number(F("temperature"), f.Temperature, -90, 60, "°C") ?? AirConditions.Standard.TemperatureCelsius;
         var minimum = reader.Number(F("minAltitude"), f.MinAltitude, -5, 60, "degrees") ?? 0;
         var zone = TimeZone(reader, F("tz"), f.Tz);
-        var horizon = Horizon(reader, F("horizon"), f.Horizon);
+        var sea = string.Equals(f.Horizon?.Trim(), "sea", StringComparison.OrdinalIgnoreCase);
+        var horizon = sea ? HorizonProfile.Flat : Horizon(reader, F("horizon"), f.Horizon);
         if (f.Name is { Length: > 200 }) reader.Fail(F("name"), "name may be at most 200 characters.");
         if (latitude is null || longitude is null || zone is null || horizon is null) return null;
         return new Site(GeodeticLocation.FromDegrees(latitude.Value, longitude.Value, elevation), zone, horizon,
-            Angle.FromDegrees(minimum), new AirConditions(pressure, temperature), string.IsNullOrWhiteSpace(f.Name) ? null : f.Name.Trim());
+            Angle.FromDegrees(minimum), new AirConditions(pressure, temperature), string.IsNullOrWhiteSpace(f.Name) ? null : f.Name.Trim(), sea);
     }
 
     private static DateTimeZone? TimeZone(QueryReader reader, string field, string? raw)
