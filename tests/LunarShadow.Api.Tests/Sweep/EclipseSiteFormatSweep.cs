@@ -51,6 +51,7 @@ public class EclipseSiteFormatSweep(ITestOutputHelper output)
             var site = sweepSite.Site;
             var name = $"{dates[eclipse.Lunation]} {sweepSite.Label}";
             LocalCircumstances? local = null;
+            string? localCalendar = null;
             Case("local", $"{name} local", () =>
             {
                 local = LocalCircumstancesCalculator.Compute(eclipse, site, SweepGrid.Time);
@@ -79,6 +80,7 @@ public class EclipseSiteFormatSweep(ITestOutputHelper output)
                 var (status, ics) = Renderings.LocalCalendar(local, response);
                 Require(status == 200, $"iCalendar status {status}");
                 Require(Readers.Calendar(ics).Count == local.VisiblePhases.Count, "iCalendar events differ from the visible phases");
+                localCalendar = ics;
                 Rendered(4);
             });
             if (local is null || !local.AnyVisible) return;
@@ -90,15 +92,17 @@ public class EclipseSiteFormatSweep(ITestOutputHelper output)
                 var camera = SweepGrid.Cameras[c] with { Mount = SweepGrid.Mounts[(turn + c) % SweepGrid.Mounts.Count] };
                 Case("photo", $"{name} photo {camera.FocalLengthMm:0}mm {camera.Mount}", () =>
                 {
-                    var plan = PhotoPlanner.Plan(eclipse, site, camera, new PhotoSettings(), SweepGrid.Time);
+                    // A 15-minute step keeps the sweep fast; every visible contact still gets its row.
+                    var plan = PhotoPlanner.Plan(eclipse, site, camera, new PhotoSettings(IntervalMinutes: 15), SweepGrid.Time);
                     var response = Renderings.Photo(plan);
                     PhotoPlan(plan, response);
                     Renderings.Json(response);
                     Require(Readers.Csv(Renderings.PhotoCsv(response)).Count == response.Timeline.Count, "photo CSV rows differ from the timeline");
                     Sequence(Renderings.PhotoSequence(response), plan.Camera);
+                    // The photo plan's iCalendar is usually the site's, parsed above; it is parsed again when it differs.
                     var (status, ics) = Renderings.PhotoCalendar(plan);
                     Require(status == 200, $"photo iCalendar status {status}");
-                    Readers.Calendar(ics);
+                    if (ics != localCalendar) Readers.Calendar(ics);
                     Interlocked.Increment(ref plans);
                     Rendered(4);
                 });
