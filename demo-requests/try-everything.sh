@@ -25,7 +25,7 @@ show "The planetarium network (POST, CSV)" "$HOST/api/v1/eclipses/2025-03-14/loc
 show "Upcoming totalities the hill can show at night (JSON)" "$HOST/api/v1/sites/upcoming?$HILL&phase=total&night=true&count=5&from=2025-01-01"
 show "Upcoming, as a subscription feed (iCalendar)" "$HOST/api/v1/sites/upcoming?$HILL&phase=partial&format=ics&from=2025-01-01"
 show "Upcoming (CSV)" "$HOST/api/v1/sites/upcoming?$HILL&format=csv&from=2025-01-01&count=5"
-show "Mira's photo plan (JSON)" "$HOST/api/v1/eclipses/2025-03-14/photo-plan?$LAKE&iso=800&aperture=6.3&focalLength=600&mount=sidereal&danjon=2.5"
+show "Mira's photo plan (JSON)" "$HOST/api/v1/eclipses/2025-03-14/photo-plan?$LAKE&iso=800&aperture=6.3&focalLength=600&mount=sidereal&danjonL=2.5"
 show "Mira's photo plan (CSV timeline)" "$HOST/api/v1/eclipses/2025-03-14/photo-plan?$LAKE&format=csv"
 show "Mira's photo plan (iCalendar shooting windows)" "$HOST/api/v1/eclipses/2025-03-14/photo-plan?$LAKE&format=ics"
 show "Mira's exposure sequence for a camera script" "$HOST/api/v1/eclipses/2025-03-14/photo-plan?$LAKE&format=sequence&bracket=1"

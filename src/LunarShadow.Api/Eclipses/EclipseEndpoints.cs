@@ -1,5 +1,5 @@
-using System.ComponentModel;
 using LunarShadow.Api.Formatting;
+using LunarShadow.Api.Common;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Embedded;
@@ -14,7 +14,18 @@ internal static class EclipseEndpoints
     /// <summary>Longest range one list request may span, in years.</summary>
     public const int MaxYearsPerRequest = 1000;
 
-    private static readonly OutputFormat[] Formats = [OutputFormat.Json, OutputFormat.Csv];
+    private static readonly FormatOffer Formats = new(OutputFormat.Json, OutputFormat.Csv);
+
+    public static readonly Parameter From = new("from", ParameterType.Date,
+        $"First UTC date of greatest eclipse, YYYY-MM-DD, years {SupportedRange.FirstYear} to +{SupportedRange.LastYear}.") { Required = true };
+
+    public static readonly Parameter To = new("to", ParameterType.Date,
+        $"Last UTC date of greatest eclipse (inclusive), YYYY-MM-DD, at most {MaxYearsPerRequest} years after from.") { Required = true };
+
+    public static readonly Parameter Kind = new("kind", ParameterType.ChoiceList, "Kinds of eclipse to keep (default: all).")
+    {
+        Allowed = WireNames.All<EclipseKind>(),
+    };
 
     public static IEndpointRouteBuilder MapEclipseEndpoints(this IEndpointRouteBuilder routes)
     {
@@ -23,6 +34,7 @@ internal static class EclipseEndpoints
             .WithName("ListEclipses")
             .WithSummary("Every lunar eclipse in a date range")
             .WithDescription("Global circumstances of each lunar eclipse whose greatest phase falls between from and to (inclusive, UTC dates, at most 1000 years apart). JSON by default; CSV with Accept: text/csv or format=csv.")
+            .Takes(new EndpointParameters([From, To, Kind, .. Parameters.Model, Formats.Parameter]))
             .Produces<EclipseListResponse>(StatusCodes.Status200OK, "application/json", "text/csv")
             .ProducesValidationProblem()
             .ProducesProblem(StatusCodes.Status406NotAcceptable);
@@ -30,102 +42,56 @@ internal static class EclipseEndpoints
             .WithName("GetEclipse")
             .WithSummary("One lunar eclipse in full, by the UTC date of its greatest phase")
             .WithDescription("The eclipse whose greatest phase falls on the given UTC date (YYYY-MM-DD; Julian calendar before 1582-10-15, astronomical year numbering). 404 when there is none.")
+            .Takes(new EndpointParameters([Parameters.EclipseDate, .. Parameters.Model, Formats.Parameter]))
             .Produces<EclipseResponse>(StatusCodes.Status200OK, "application/json", "text/csv")
-            .ProducesValidationProblem()
-            .ProducesProblem(StatusCodes.Status404NotFound)
-            .ProducesProblem(StatusCodes.Status406NotAcceptable);
+            .ProducesEclipseProblems();
         return routes;
     }
 
-    internal static IResult List(
-        HttpRequest request,
-        [Description("First UTC date, YYYY-MM-DD (Julian calendar before 1582-10-15; e.g. -0584-05-01), years −1999 to +3000.")] string? from,
-        [Description("Last UTC date (inclusive), YYYY-MM-DD, at most 1000 years after from.")] string? to,
-        [Description("Comma-separated kinds to keep: total, partial, penumbral (default: all).")] string? kind,
-        [AsParameters] ModelParameters computation,
-        [Description("Response format: json (default) or csv; overrides the Accept header.")] string? format)
+    internal static IResult List(HttpRequest request)
     {
-        var reader = new QueryReader();
-        var first = reader.Date("from", from);
-        var last = reader.Date("to", to);
-        var kinds = ReadKinds(reader, kind);
-        var (model, time) = computation.Read(reader);
-        var output = ContentNegotiation.Choose(request, format, Formats, reader);
-        if (first is { } f && last is { } l)
+        var f = RequestFields.FromQuery(request, new QueryReader());
+        var first = f.Date(From);
+        var last = f.Date(To);
+        var kinds = f.Choices(Kind);
+        var (model, time) = ModelChoice.Read(f);
+        var output = Formats.Choose(request, f);
+        if (first is { } a && last is { } b)
         {
-            var span = DayOf(l) - DayOf(f);
-            if (span < 0) reader.Fail("to", $"to must not be before from; got from={from}, to={to}.");
-            else if (span > MaxYearsPerRequest * 365.25 + 1) reader.Fail("to", $"A request may span at most {MaxYearsPerRequest} years; from={from} to {to} spans {span / 365.25:0} years.");
+            var span = DayOf(b) - DayOf(a);
+            if (span < 0) f.Fail(To, $"to must not be before from; got from={a.ToIsoDateString()}, to={b.ToIsoDateString()}.");
+            else if (span > MaxYearsPerRequest * 365.25 + 1) f.Fail(To, $"A request may span at most {MaxYearsPerRequest} years; from={a.ToIsoDateString()} to {b.ToIsoDateString()} spans {span / 365.25:0} years.");
         }
-        if (!reader.IsValid || first is null || last is null) return Problems.InvalidQuery(reader);
-        if (output is null) return Problems.NotAcceptable(Formats);
+        if (!f.Reader.IsValid || first is null || last is null) return Problems.InvalidQuery(f.Reader);
+        if (output is null) return Problems.NotAcceptable(Formats.Formats);
 
         var aborted = request.HttpContext.RequestAborted;
-        var eclipses = InDateRange(model, time, DayOf(first.Value), DayOf(last.Value) + 1)
+        var eclipses = EclipseLookup.InDateRange(model, time, DayOf(first.Value), DayOf(last.Value) + 1)
             .Select(e =>
             {
                 aborted.ThrowIfCancellationRequested(); // honours the request timeout on long ranges
                 return e;
             })
-            .Where(e => kinds.Contains(e.Kind))
+            .Where(e => kinds.Contains(WireNames.Of(e.Kind)))
             .Select(e => EclipseMapping.ToResponse(e, time))
             .ToList();
         if (output == OutputFormat.Csv) return Results.Text(EclipseMapping.Csv(eclipses), ContentNegotiation.MediaType(OutputFormat.Csv));
-        return TypedResults.Ok(new EclipseListResponse(model.Name, LayerKm(model), time.DeltaTModel.Name, from!.Trim(), to!.Trim(),
+        return TypedResults.Ok(new EclipseListResponse(model.Name, LayerKm(model), time.DeltaTModel.Name, f.Raw(From)!.Trim(), f.Raw(To)!.Trim(),
             eclipses.Count, eclipses, EmbeddedDataSet.VersionTag));
     }
 
-    internal static IResult One(
-        HttpRequest request,
-        [Description("UTC date of greatest eclipse, YYYY-MM-DD (Julian calendar before 1582-10-15).")] string date,
-        [AsParameters] ModelParameters computation,
-        [Description("Response format: json (default) or csv; overrides the Accept header.")] string? format)
+    internal static IResult One(HttpRequest request)
     {
-        var reader = new QueryReader();
-        var day = reader.Date("date", date);
-        var (model, time) = computation.Read(reader);
-        var output = ContentNegotiation.Choose(request, format, Formats, reader);
-        if (EclipseLookup.Resolve(reader, day, date, output, Formats, model, time, out var eclipse) is { } problem) return problem;
-        var response = EclipseMapping.ToResponse(eclipse, time);
-        return output == OutputFormat.Csv
+        var f = RequestFields.FromQuery(request, new QueryReader());
+        var r = EclipseLookup.Read(request, f, Formats);
+        if (EclipseLookup.Resolve(f, r, Formats, out var eclipse) is { } problem) return problem;
+        var response = EclipseMapping.ToResponse(eclipse, r.Time);
+        return r.Output == OutputFormat.Csv
             ? Results.Text(EclipseMapping.Csv([response]), ContentNegotiation.MediaType(OutputFormat.Csv))
             : TypedResults.Ok(response);
-    }
-
-    /// <summary>Eclipses whose greatest phase falls in [startDay, endDay) of UTC (Julian dates of 0h UTC).</summary>
-    internal static IEnumerable<LunarEclipse> InDateRange(ShadowModel model, TimeScaleConverter time, double startDay, double endDay)
-    {
-        // ΔT reaches about 13 hours at the ends of the span; search a day beyond each end, then keep by UTC.
-        var from = TtInstant.FromJulianDate(startDay - 1);
-        var to = TtInstant.FromJulianDate(endDay + 1);
-        foreach (var e in EclipseFinder.For(model).Between(from, to))
-        {
-            var utc = time.ToUtc(e.GreatestEclipse).ToJulianDate();
-            if (utc >= startDay && utc < endDay) yield return e;
-        }
     }
 
     private static double DayOf(CalendarDate date) => JulianDate.FromCalendar(date.Year, date.Month, date.Day, date.IsGregorian).Day;
 
     private static double? LayerKm(ShadowModel model) => model.Kind == ShadowModelKind.Layer ? model.LayerHeightKm : null;
-
-    private static HashSet<EclipseKind> ReadKinds(QueryReader reader, string? kind)
-    {
-        var all = new HashSet<EclipseKind> { EclipseKind.Penumbral, EclipseKind.Partial, EclipseKind.Total };
-        if (string.IsNullOrWhiteSpace(kind)) return all;
-        var chosen = new HashSet<EclipseKind>();
-        foreach (var part in kind.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries))
-        {
-            switch (part.ToLowerInvariant())
-            {
-                case "total": chosen.Add(EclipseKind.Total); break;
-                case "partial": chosen.Add(EclipseKind.Partial); break;
-                case "penumbral": chosen.Add(EclipseKind.Penumbral); break;
-                default:
-                    reader.Fail("kind", $"kind must be a comma-separated list of total, partial, penumbral; got '{part}'.");
-                    break;
-            }
-        }
-        return chosen.Count == 0 ? all : chosen;
-    }
 }

@@ -1,4 +1,5 @@
 using LunarShadow.Api.Formatting;
+using LunarShadow.Api.Common;
 using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Shadow;
 using LunarShadow.Astronomy.Time;
@@ -14,7 +15,7 @@ internal static class EclipseMapping
         var greatestUtc = time.ToUtc(e.GreatestEclipse);
         return new EclipseResponse(
             TimeFormats.UtcDate(greatestUtc),
-            KindName(e.Kind),
+            WireNames.Of(e.Kind),
             new InstantResponse(TimeFormats.Utc(greatestUtc), TimeFormats.Tt(e.GreatestEclipse), TimeFormats.Round(deltaT.UncertaintySeconds, 1)),
             TimeFormats.Round(deltaT.Seconds, 1),
             TimeFormats.Round(deltaT.UncertaintySeconds, 1),
@@ -55,13 +56,6 @@ internal static class EclipseMapping
         return new ShadowDiagramResponse(TimeFormats.Round(e.RadiiAtGreatest.Umbra.Degrees, 5), TimeFormats.Round(e.RadiiAtGreatest.Penumbra.Degrees, 5),
             TimeFormats.Round(e.MoonAtGreatest.SemiDiameter.Degrees, 5), points);
     }
-
-    public static string KindName(EclipseKind kind) => kind switch
-    {
-        EclipseKind.Total => "total",
-        EclipseKind.Partial => "partial",
-        _ => "penumbral",
-    };
 
     public static string Csv(IEnumerable<EclipseResponse> eclipses)
     {

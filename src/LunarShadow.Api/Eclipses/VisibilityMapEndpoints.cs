@@ -1,6 +1,6 @@
-using System.ComponentModel;
 using System.Text.Json.Serialization;
 using LunarShadow.Api.Formatting;
+using LunarShadow.Api.Common;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Sites;
 
@@ -9,40 +9,34 @@ namespace LunarShadow.Api.Eclipses;
 /// <summary>GET /api/v1/eclipses/{date}/visibility-map: GeoJSON of where the eclipse can be seen.</summary>
 internal static class VisibilityMapEndpoints
 {
-    private static readonly OutputFormat[] Formats = [OutputFormat.GeoJson, OutputFormat.Json];
+    private static readonly FormatOffer Formats = new(OutputFormat.GeoJson, OutputFormat.Json);
 
     public static IEndpointRouteBuilder MapVisibilityMapEndpoints(this IEndpointRouteBuilder routes)
     {
         routes.MapGet("/api/v1/eclipses/{date}/visibility-map", Get)
             .WithTags("Eclipses")
             .WithName("GetVisibilityMap")
+            .Takes(new EndpointParameters([Parameters.EclipseDate, .. Parameters.Model, Formats.Parameter]))
             .WithSummary("Where on Earth the eclipse can be seen, as GeoJSON")
             .WithDescription("An RFC 7946 FeatureCollection: for each contact (and greatest eclipse) a MultiPolygon of where the Moon is above the horizon then, plus 'whole-eclipse' (above the horizon at both P1 and P4) and 'whole-totality' (at both U2 and U3). Computed on a 1° grid on a spherical Earth at sea level with standard refraction.")
             .Produces<VisibilityMapDocument>(StatusCodes.Status200OK, "application/geo+json", "application/json")
-            .ProducesValidationProblem()
-            .ProducesProblem(StatusCodes.Status404NotFound)
-            .ProducesProblem(StatusCodes.Status406NotAcceptable);
+            .ProducesEclipseProblems();
         return routes;
     }
 
-    internal static IResult Get(
-        HttpRequest request,
-        [Description("UTC date of greatest eclipse, YYYY-MM-DD (Julian calendar before 1582-10-15).")] string date,
-        [AsParameters] ModelParameters computation,
-        [Description("Response format: geojson (default) or json (the same document as application/json).")] string? format)
+    internal static IResult Get(HttpRequest request)
     {
-        var reader = new QueryReader();
-        var day = reader.Date("date", date);
-        var (model, time) = computation.Read(reader);
-        var output = ContentNegotiation.Choose(request, format, Formats, reader);
-        if (EclipseLookup.Resolve(reader, day, date, output, Formats, model, time, out var eclipse) is { } problem) return problem;
+        var f = RequestFields.FromQuery(request, new QueryReader());
+        var query = EclipseLookup.Read(request, f, Formats);
+        if (EclipseLookup.Resolve(f, query, Formats, out var eclipse) is { } problem) return problem;
+        var (model, time) = (query.Model, query.Time);
 
         var regions = VisibilityMap.Compute(eclipse, time.DeltaTAt(eclipse.GreatestEclipse).Seconds);
         var features = regions.Select(r => new GeoJsonFeature(
             new GeoJsonMultiPolygon(r.Boxes.Select(b => new[] { new[] { new[] { b.West, b.South }, new[] { b.East, b.South }, new[] { b.East, b.North }, new[] { b.West, b.North }, new[] { b.West, b.South } } }).ToList()),
             new VisibilityProperties(r.Name, Describe(r.Name), r.Tt is { } tt ? TimeFormats.Utc(time.ToUtc(tt)) : null, VisibilityMap.ResolutionDegrees))).ToList();
-        var collection = new VisibilityMapDocument(features, EclipseMapping.KindName(eclipse.Kind), TimeFormats.UtcDate(time.ToUtc(eclipse.GreatestEclipse)), model.Name);
-        return Results.Json(collection, contentType: ContentNegotiation.MediaType(output!.Value));
+        var collection = new VisibilityMapDocument(features, WireNames.Of(eclipse.Kind), TimeFormats.UtcDate(time.ToUtc(eclipse.GreatestEclipse)), model.Name);
+        return Results.Json(collection, contentType: ContentNegotiation.MediaType(query.Output!.Value));
     }
 
     private static string Describe(string name) => name switch

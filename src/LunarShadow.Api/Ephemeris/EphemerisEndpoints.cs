@@ -1,4 +1,3 @@
-using System.ComponentModel;
 using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Embedded;
@@ -16,27 +15,30 @@ internal static class EphemerisEndpoints
     {
         routes.MapGet("/api/v1/ephemeris", Get)
             .WithName("GetEphemeris")
+            .Takes(Takes)
             .WithTags("Ephemeris")
             .WithSummary("Apparent places of the Moon and Sun at one instant")
             .WithDescription("Geocentric apparent right ascension, declination and distance of date (ELP/MPP02, VSOP87, Vondrák 2011 precession, IAU 2000B nutation, light time and aberration), semi-diameters and parallaxes; with a site, topocentric places with refraction.");
         return routes;
     }
 
-    internal static Results<Ok<EphemerisResponse>, ValidationProblem> Get(
-        [Description("The instant, ISO 8601 with Z or an offset, years −1999 to +3000 (e.g. 2025-03-14T06:58:00Z).")] string? utc,
-        [Description(SiteQuery.LatitudeDescription + " Give with lon for topocentric places.")] string? lat,
-        [Description(SiteQuery.LongitudeDescription)] string? lon,
-        [Description(SiteQuery.ElevationDescription)] string? elevation,
-        [Description(SiteQuery.PressureDescription)] string? pressure,
-        [Description(SiteQuery.TemperatureDescription)] string? temperature,
-        [Description(DeltaTQuery.DeltaTDescription)] string? deltaT,
-        [Description(DeltaTQuery.ModelDescription)] string? deltaTModel)
+    public static readonly Parameter Utc = new("utc", ParameterType.Instant,
+        "The instant, ISO 8601 with Z or an offset, years −1999 to +3000 (e.g. 2025-03-14T06:58:00Z).") { Required = true };
+
+    // The site is optional here: give lat and lon (with elevation and air) for topocentric places.
+    private static readonly EndpointParameters Takes = new(
+    [
+        Utc, Parameters.Latitude with { Required = false }, Parameters.Longitude with { Required = false }, Parameters.Elevation,
+        Parameters.Pressure, Parameters.Temperature, Parameters.DeltaT, Parameters.DeltaTModel,
+    ]);
+
+    internal static Results<Ok<EphemerisResponse>, ValidationProblem> Get(HttpRequest request)
     {
-        var reader = new QueryReader();
-        var instant = reader.Instant("utc", utc);
-        var site = SiteQuery.Read(reader, new SiteFields(lat, lon, elevation, Pressure: pressure, Temperature: temperature), required: false);
-        var model = DeltaTQuery.Read(reader, deltaT, deltaTModel);
-        if (!reader.IsValid || instant is null) return Problems.InvalidQuery(reader);
+        var f = RequestFields.FromQuery(request, new QueryReader());
+        var instant = f.Instant(Utc);
+        var site = SiteParameters.ReadSite(f, required: false);
+        var model = ModelChoice.DeltaT(f);
+        if (!f.Reader.IsValid || instant is null) return Problems.InvalidQuery(f.Reader);
 
         var converter = new TimeScaleConverter(model);
         var tt = converter.ToTerrestrialTime(instant.Value);

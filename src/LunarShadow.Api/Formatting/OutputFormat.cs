@@ -12,7 +12,7 @@ internal enum OutputFormat
     Sequence,
 }
 
-/// <summary>Chooses a representation from <c>?format=</c> (which wins) or the Accept header.</summary>
+/// <summary>Names and media types of the representations, and the Accept header's choice among them.</summary>
 internal static class ContentNegotiation
 {
     private static readonly Dictionary<OutputFormat, (string Name, string MediaType)> Known = new()
@@ -30,17 +30,12 @@ internal static class ContentNegotiation
     /// <summary>The names accepted by <c>?format=</c> among the allowed formats.</summary>
     public static IReadOnlyCollection<string> Names(IEnumerable<OutputFormat> allowed) => allowed.Select(f => Known[f].Name).ToList();
 
-    /// <summary>
-    /// The chosen format; null from the Accept header when it admits none of the allowed ones (the caller answers 406).
-    /// An unknown <c>format</c> value is reported on the reader as a 400.
-    /// </summary>
-    public static OutputFormat? Choose(HttpRequest request, string? format, IReadOnlyCollection<OutputFormat> allowed, Validation.QueryReader reader)
+    /// <summary>The name <c>?format=</c> takes for a format.</summary>
+    public static string Name(OutputFormat format) => Known[format].Name;
+
+    /// <summary>The format the Accept header prefers among the allowed ones (the first when it names none); null when it admits none.</summary>
+    public static OutputFormat? FromAccept(HttpRequest request, IReadOnlyCollection<OutputFormat> allowed)
     {
-        if (!string.IsNullOrWhiteSpace(format))
-        {
-            var name = reader.OneOf("format", format, Names(allowed));
-            return name is null ? allowed.First() : allowed.First(f => Known[f].Name == name);
-        }
         var accept = request.GetTypedHeaders().Accept;
         if (accept is null || accept.Count == 0) return allowed.First();
         foreach (var range in accept.OrderByDescending(a => a.Quality ?? 1))

@@ -9,6 +9,12 @@ namespace LunarShadow.Api.Hosting;
 /// <summary>The request pipeline and the endpoint map.</summary>
 internal static class Pipeline
 {
+    /// <summary>The liveness probe's path.</summary>
+    public const string LivePath = "/health/live";
+
+    /// <summary>The readiness probe's path.</summary>
+    public const string ReadyPath = "/health/ready";
+
     public static WebApplication UseLunarShadowPipeline(this WebApplication app)
     {
         app.UseMiddleware<CorrelationIdMiddleware>();
@@ -25,7 +31,8 @@ internal static class Pipeline
 
     public static WebApplication MapLunarShadowEndpoints(this WebApplication app)
     {
-        app.MapOpenApi("/openapi/{documentName}.json");
+        // The document is built once per process and then served from the output cache.
+        app.MapOpenApi("/openapi/{documentName}.json").CacheOutput(policy => policy.Expire(TimeSpan.FromDays(365)));
         app.UseSwaggerUI(options =>
         {
             options.RoutePrefix = "docs";
@@ -37,8 +44,8 @@ internal static class Pipeline
         {
             ContentTypeProvider = new Microsoft.AspNetCore.StaticFiles.FileExtensionContentTypeProvider { Mappings = { [".geojson"] = "application/geo+json" } },
         });
-        app.MapHealthChecks("/health/live", new Microsoft.AspNetCore.Diagnostics.HealthChecks.HealthCheckOptions { Predicate = _ => false });
-        app.MapHealthChecks("/health/ready", new Microsoft.AspNetCore.Diagnostics.HealthChecks.HealthCheckOptions { Predicate = c => c.Tags.Contains("ready") });
+        app.MapHealthChecks(LivePath, new Microsoft.AspNetCore.Diagnostics.HealthChecks.HealthCheckOptions { Predicate = _ => false });
+        app.MapHealthChecks(ReadyPath, new Microsoft.AspNetCore.Diagnostics.HealthChecks.HealthCheckOptions { Predicate = c => c.Tags.Contains("ready") });
         app.MapEphemerisEndpoints();
         app.MapEclipseEndpoints();
         app.MapVisibilityMapEndpoints();

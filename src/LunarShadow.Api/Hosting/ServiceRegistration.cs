@@ -35,8 +35,18 @@ internal static class ServiceRegistration
         builder.Services.AddProblemDetails();
         // Numbers are written and read as JSON numbers only, so the OpenAPI schema shows them as such; a NaN or an
         // infinity throws rather than becoming null.
-        builder.Services.ConfigureHttpJsonOptions(options => Formatting.FiniteNumbers.Configure(options.SerializerOptions));
-        builder.Services.AddOpenApi("v1", options => options.AddSchemaTransformer<TimeSchemaTransformer>().AddDocumentTransformer((document, _, _) =>
+        // Enum values are written under the one naming policy the mappings and the OpenAPI enums use.
+        builder.Services.ConfigureHttpJsonOptions(options =>
+        {
+            Formatting.FiniteNumbers.Configure(options.SerializerOptions);
+            options.SerializerOptions.Converters.Add(new JsonStringEnumConverter(Common.WireNames.Policy, allowIntegerValues: false));
+        });
+        // Parameters, bodies and response enums come from the same tables the handlers and mappings use.
+        builder.Services.AddOpenApi("v1", options => options.AddSchemaTransformer<TimeSchemaTransformer>()
+            .AddSchemaTransformer<ResponseEnumTransformer>()
+            .AddOperationTransformer<ParameterTableTransformer>()
+            .AddDocumentTransformer<HealthDocumentTransformer>()
+            .AddDocumentTransformer((document, _, _) =>
         {
             document.Info.Title = "LunarShadow";
             document.Info.Description = "Lunar eclipses for your own site and time zone: ephemeris, shadow, eclipses, local circumstances and photography plans, computed from ELP/MPP02 and VSOP87 at request time.";

@@ -11,7 +11,7 @@ namespace LunarShadow.Api.Photography;
 /// <param name="Sequences">Multi-exposure and time-lapse plans (null when nothing is visible).</param>
 /// <param name="Cautions">Safety notes.</param>
 public sealed record PhotoPlanResponse(
-    Sites.SiteEcho Site, Sites.EclipseBrief Eclipse, CameraEcho Camera, string Summary, BrightnessModelEcho Model,
+    Common.SiteEcho Site, Common.EclipseBrief Eclipse, CameraEcho Camera, string Summary, BrightnessModelEcho Model,
     IReadOnlyList<TimelineRowResponse> Timeline, FramingResponse Framing, SequencesResponse? Sequences, IReadOnlyList<string> Cautions);
 
 /// <summary>The camera as understood.</summary>
@@ -29,11 +29,15 @@ public sealed record CameraEcho(double SensorWidthMm, double SensorHeightMm, dou
     double FastestShutterSeconds, double SlowestShutterSeconds);
 
 /// <summary>The brightness model used.</summary>
-/// <param name="Danjon">Expected Danjon luminosity L.</param>
+/// <param name="DanjonL">Expected Danjon luminosity L.</param>
 /// <param name="ExtinctionPerAirMass">Extinction coefficient, magnitudes per air mass.</param>
 /// <param name="UncertaintyStops">One-sigma uncertainty of the totality brightness, stops.</param>
 /// <param name="Note">How to read the numbers.</param>
-public sealed record BrightnessModelEcho(double Danjon, double ExtinctionPerAirMass, double UncertaintyStops, string Note);
+public sealed record BrightnessModelEcho(double DanjonL, double ExtinctionPerAirMass, double UncertaintyStops, string Note)
+{
+    /// <summary>Deprecated: the former name of <see cref="DanjonL"/>, written for one more release.</summary>
+    public double Danjon => DanjonL;
+}
 
 /// <summary>One timeline row.</summary>
 /// <param name="Utc">UTC.</param>

@@ -1,5 +1,5 @@
 using LunarShadow.Api.Formatting;
-using LunarShadow.Api.Sites;
+using LunarShadow.Api.Common;
 using LunarShadow.Astronomy.Photography;
 using LunarShadow.Astronomy.Time;
 
@@ -18,12 +18,12 @@ internal static class PhotoMapping
         return new PhotoPlanResponse(
             local.Site, local.Eclipse,
             new CameraEcho(c.SensorWidthMm, c.SensorHeightMm, TimeFormats.Round(c.PixelPitchMicrons, 3), c.EffectiveFocalLengthMm, c.EffectiveAperture,
-                c.ShutterSeconds is null ? c.Iso : null, c.ShutterSeconds, MountName(c.Mount), c.FastestShutterSeconds, c.SlowestShutterSeconds),
+                c.ShutterSeconds is null ? c.Iso : null, c.ShutterSeconds, PhotoParameters.Mounts.First(m => m.Value == c.Mount).Key, c.FastestShutterSeconds, c.SlowestShutterSeconds),
             local.Summary,
             new BrightnessModelEcho(plan.Settings.Danjon, TimeFormats.Round(plan.ExtinctionPerAirMass, 4), plan.UncertaintyStops,
                 "Brightness is computed from the shadow geometry and the uneclipsed Moon; inside the umbra it is an estimate from the expected Danjon L, good to about ±1.5 stops. Bracket, and check the histogram."),
             plan.Timeline.Select(r => new TimelineRowResponse(
-                TimeFormats.Utc(r.Utc), TimeFormats.Local(r.Utc, zone).Text, r.Contact, PhaseName(r.Phase),
+                TimeFormats.Utc(r.Utc), TimeFormats.Local(r.Utc, zone).Text, r.Contact, WireNames.Of(r.Phase),
                 TimeFormats.Round(r.UmbralFraction, 4), TimeFormats.Round(r.PenumbralFraction, 4),
                 TimeFormats.Round(r.Altitude.Degrees, 2), TimeFormats.Round(r.Azimuth.Degrees, 2), TimeFormats.Round(r.AirMass, 3),
                 TimeFormats.Round(r.BrightnessStops, 2), TimeFormats.Round(r.LimbStops, 2), TimeFormats.Round(r.DiscStops, 2),
@@ -56,21 +56,6 @@ internal static class PhotoMapping
     public static List<SequenceStep> Sequence(PhotoPlanResponse r) => r.Timeline
         .SelectMany(row => row.Exposure.BracketShutterSeconds.Select(t => new SequenceStep(row.Utc, t, row.Exposure.Iso, row.Exposure.Aperture)))
         .ToList();
-
-    public static string PhaseName(MoonPhaseState state) => state switch
-    {
-        MoonPhaseState.Total => "total",
-        MoonPhaseState.Partial => "partial",
-        MoonPhaseState.Penumbral => "penumbral",
-        _ => "uneclipsed",
-    };
-
-    private static string MountName(Mount mount) => mount switch
-    {
-        Mount.SiderealTracking => "sidereal",
-        Mount.LunarTracking => "lunar",
-        _ => "fixed",
-    };
 
     // Shutter times to four significant figures.
     private static double Seconds(double t) => t <= 0 ? 0 : Math.Round(t, Math.Max(0, 3 - (int)Math.Floor(Math.Log10(t))));

@@ -1,54 +1,128 @@
-using System.ComponentModel;
-using Microsoft.AspNetCore.Mvc;
+using LunarShadow.Api.Validation;
+using LunarShadow.Astronomy.Photography;
 
 namespace LunarShadow.Api.Photography;
 
-// The photo-plan query, declared once for the OpenAPI document; the same names are read from a POST body. (No XML docs:
-// each parameter's text is its Description.)
-internal sealed record PhotoParameters(
-    [property: FromQuery(Name = "lat"), Description(Validation.SiteQuery.LatitudeDescription)] string? Lat,
-    [property: FromQuery(Name = "lon"), Description(Validation.SiteQuery.LongitudeDescription)] string? Lon,
-    [property: FromQuery(Name = "elevation"), Description(Validation.SiteQuery.ElevationDescription)] string? Elevation,
-    [property: FromQuery(Name = "tz"), Description(Validation.SiteQuery.TimeZoneDescription)] string? Tz,
-    [property: FromQuery(Name = "minAltitude"), Description(Validation.SiteQuery.MinAltitudeDescription)] string? MinAltitude,
-    [property: FromQuery(Name = "horizon"), Description(Validation.SiteQuery.HorizonDescription)] string? Horizon,
-    [property: FromQuery(Name = "name"), Description(Validation.SiteQuery.NameDescription)] string? Name,
-    [property: FromQuery(Name = "iso"), Description("ISO speed, 25 to 409600 (default 400); ignored when shutter is given.")] string? Iso,
-    [property: FromQuery(Name = "aperture"), Description("Lens f-number, 0.95 to 64 (default 8).")] string? Aperture,
-    [property: FromQuery(Name = "shutter"), Description("A fixed shutter time in seconds, 1/8000 to 3600 and within fastestShutter to slowestShutter: the ISO is then computed.")] string? Shutter,
-    [property: FromQuery(Name = "fastestShutter"), Description("The camera's fastest shutter in seconds, 1/64000 to 1 (default 1/8000 = 0.000125); faster exposures are avoided by closing the aperture and lowering the ISO.")] string? FastestShutter,
-    [property: FromQuery(Name = "slowestShutter"), Description("The camera's slowest timed shutter in seconds, up to 3600 (default 30); longer exposures are avoided by raising the ISO.")] string? SlowestShutter,
-    [property: FromQuery(Name = "focalLength"), Description("Lens focal length in mm, above 0 up to 10000 (default 400).")] string? FocalLength,
-    [property: FromQuery(Name = "teleconverter"), Description("Teleconverter or crop factor multiplying the focal length, 1 to 4 (default 1).")] string? Teleconverter,
-    [property: FromQuery(Name = "sensor"), Description("Sensor size in mm, WIDTHxHEIGHT, each 1 to 100 (default 36x24).")] string? Sensor,
-    [property: FromQuery(Name = "pixelPitch"), Description("Pixel pitch in µm, 0.5 to 30; or give pixels.")] string? PixelPitch,
-    [property: FromQuery(Name = "pixels"), Description("Pixels across the sensor's width, 100 to 50000 (default 6000), used when pixelPitch is absent.")] string? Pixels,
-    [property: FromQuery(Name = "mount"), Description("fixed (tripod, default), sidereal (star tracking) or lunar (Moon tracking).")] string? Mount,
-    [property: FromQuery(Name = "danjon"), Description("Expected Danjon luminosity L, 0 (very dark) to 4 (bright), fractions allowed (default 2).")] string? Danjon,
-    [property: FromQuery(Name = "interval"), Description("Timeline step in minutes, 1 to 60 (default 5).")] string? Interval,
-    [property: FromQuery(Name = "bracket"), Description("Bracket of ±N stops, 0 to 5 (default 2).")] string? Bracket,
-    [property: FromQuery(Name = "blur"), Description("Largest acceptable motion blur in pixels, 0.1 to 20 (default 1).")] string? Blur,
-    [property: FromQuery(Name = "extinction"), Description("Extinction coefficient in magnitudes per air mass, 0 to 2 (default from the site's height).")] string? Extinction,
-    [property: FromQuery(Name = "gap"), Description("Gap between successive discs of a multi-exposure, as a fraction of the Moon's diameter, 0 to 5 (default 0.25).")] string? Gap,
-    [property: FromQuery(Name = "timelapseInterval"), Description("Time-lapse interval in seconds, 1 to 600 (default 10).")] string? TimelapseInterval,
-    [property: FromQuery(Name = "fileSize"), Description("Size of one frame in MB, 1 to 500 (default 30).")] string? FileSize,
-    [property: FromQuery(Name = "start"), Description("When the fixed-frame check starts, ISO 8601 instant (default: the first visible moment).")] string? Start)
+/// <summary>The camera and plan parameters of a photo plan, each described once (the site's are <see cref="Parameters.Site"/>).</summary>
+internal static class PhotoParameters
 {
-    /// <summary>The value of a field by its query name.</summary>
-    public string? this[string name] => name switch
+    public static readonly Parameter Iso = new("iso", ParameterType.Number, "ISO speed; ignored when shutter is given.")
     {
-        "lat" => Lat, "lon" => Lon, "elevation" => Elevation, "tz" => Tz, "minAltitude" => MinAltitude, "horizon" => Horizon,
-        "name" => Name, "iso" => Iso, "aperture" => Aperture, "shutter" => Shutter, "fastestShutter" => FastestShutter, "slowestShutter" => SlowestShutter, "focalLength" => FocalLength,
-        "teleconverter" => Teleconverter, "sensor" => Sensor, "pixelPitch" => PixelPitch, "pixels" => Pixels, "mount" => Mount,
-        "danjon" => Danjon, "interval" => Interval, "bracket" => Bracket, "blur" => Blur, "extinction" => Extinction, "gap" => Gap,
-        "timelapseInterval" => TimelapseInterval, "fileSize" => FileSize, "start" => Start,
-        _ => null,
+        Unit = "ISO", Minimum = ExposureCalculator.MinIso, Maximum = ExposureCalculator.MaxIso, Default = 400.0,
     };
 
-    /// <summary>Every field name.</summary>
-    public static IReadOnlyList<string> Names { get; } =
+    public static readonly Parameter Aperture = new("aperture", ParameterType.Number, "Lens f-number.")
+    {
+        Unit = "f-number", Minimum = 0.95, Maximum = 64, Default = 8.0,
+    };
+
+    public static readonly Parameter Shutter = new("shutter", ParameterType.Number, "A fixed shutter time: the ISO is then computed.")
+    {
+        Unit = "seconds", Minimum = 1.0 / 8000, Maximum = 3600,
+    };
+
+    public static readonly Parameter FastestShutter = new("fastestShutter", ParameterType.Number,
+        "The camera's fastest shutter; faster exposures are avoided by closing the aperture (to f/16) and lowering the ISO (to 100).")
+    {
+        Unit = "seconds", Minimum = 1.0 / 64000, Maximum = 1, Default = Astronomy.Photography.Camera.DefaultFastestShutterSeconds,
+    };
+
+    public static readonly Parameter SlowestShutter = new("slowestShutter", ParameterType.Number,
+        "The camera's slowest timed shutter; longer exposures are avoided by raising the ISO (to 25600).")
+    {
+        Unit = "seconds", Minimum = 1.0 / 64000, Maximum = 3600, Default = Astronomy.Photography.Camera.DefaultSlowestShutterSeconds,
+    };
+
+    public static readonly Parameter FocalLength = new("focalLength", ParameterType.Number, "Lens focal length.")
+    {
+        Unit = "mm", Minimum = 0, MinimumExclusive = true, Maximum = 10000, Default = 400.0,
+    };
+
+    public static readonly Parameter Teleconverter = new("teleconverter", ParameterType.Number,
+        "Teleconverter or crop factor multiplying the focal length.")
+    {
+        Unit = "×", Minimum = 1, Maximum = 4, Default = 1.0,
+    };
+
+    public static readonly Parameter Sensor = new("sensor", ParameterType.Text, "Sensor size in mm, WIDTHxHEIGHT, each 1 to 100.")
+    {
+        Default = "36x24", Pattern = @"^[0-9.]+[xX][0-9.]+$",
+    };
+
+    public static readonly Parameter PixelPitch = new("pixelPitch", ParameterType.Number, "Pixel pitch; or give pixels.")
+    {
+        Unit = "µm", Minimum = 0.5, Maximum = 30,
+    };
+
+    public static readonly Parameter Pixels = new("pixels", ParameterType.Number,
+        "Pixels across the sensor's width, used when pixelPitch is absent.")
+    {
+        Unit = "pixels", Minimum = 100, Maximum = 50000, Default = 6000.0,
+    };
+
+    /// <summary>The mount names on the wire and what they mean.</summary>
+    public static readonly IReadOnlyDictionary<string, Mount> Mounts = new Dictionary<string, Mount>
+    {
+        ["fixed"] = Mount.FixedTripod, ["sidereal"] = Mount.SiderealTracking, ["lunar"] = Mount.LunarTracking,
+    };
+
+    public static readonly Parameter MountChoice = new("mount", ParameterType.Choice,
+        "fixed (tripod), sidereal (star tracking) or lunar (Moon tracking).")
+    {
+        Allowed = [.. Mounts.Keys], Default = "fixed",
+    };
+
+    /// <summary>The expected Danjon luminosity; "danjon" is its former name (it also names a shadow model).</summary>
+    public static readonly Parameter DanjonL = new("danjonL", ParameterType.Number,
+        "Expected Danjon luminosity L of totality, 0 (very dark) to 4 (bright), fractions allowed.")
+    {
+        Unit = "Danjon L", Minimum = 0, Maximum = 4, Default = UmbralGlow.DefaultDanjon, FormerNames = ["danjon"],
+    };
+
+    public static readonly Parameter Interval = new("interval", ParameterType.Number, "Timeline step.")
+    {
+        Unit = "minutes", Minimum = 1, Maximum = 60, Default = 5.0,
+    };
+
+    public static readonly Parameter Bracket = new("bracket", ParameterType.Integer, "Bracket of ±N stops.")
+    {
+        Unit = "stops", Minimum = 0, Maximum = 5, Default = 2.0,
+    };
+
+    public static readonly Parameter Blur = new("blur", ParameterType.Number, "Largest acceptable motion blur.")
+    {
+        Unit = "pixels", Minimum = 0.1, Maximum = 20, Default = 1.0,
+    };
+
+    public static readonly Parameter Extinction = new("extinction", ParameterType.Number,
+        "Extinction coefficient (default from the site's height).")
+    {
+        Unit = "magnitudes per air mass", Minimum = 0, Maximum = 2,
+    };
+
+    public static readonly Parameter Gap = new("gap", ParameterType.Number,
+        "Gap between successive discs of a multi-exposure, in Moon diameters.")
+    {
+        Unit = "Moon diameters", Minimum = 0, Maximum = 5, Default = 0.25,
+    };
+
+    public static readonly Parameter TimelapseInterval = new("timelapseInterval", ParameterType.Number, "Time-lapse interval.")
+    {
+        Unit = "seconds", Minimum = 1, Maximum = 600, Default = 10.0,
+    };
+
+    public static readonly Parameter FileSize = new("fileSize", ParameterType.Number, "Size of one frame.")
+    {
+        Unit = "MB", Minimum = 1, Maximum = 500, Default = 30.0,
+    };
+
+    public static readonly Parameter Start = new("start", ParameterType.Instant,
+        "When the fixed-frame check starts, ISO 8601 instant (default: the first visible moment).");
+
+    /// <summary>The camera and plan fields, in the order the document lists them.</summary>
+    public static readonly IReadOnlyList<Parameter> Camera =
     [
-        "lat", "lon", "elevation", "tz", "minAltitude", "horizon", "name", "iso", "aperture", "shutter", "fastestShutter", "slowestShutter", "focalLength", "teleconverter",
-        "sensor", "pixelPitch", "pixels", "mount", "danjon", "interval", "bracket", "blur", "extinction", "gap", "timelapseInterval", "fileSize", "start",
+        Iso, Aperture, Shutter, FastestShutter, SlowestShutter, FocalLength, Teleconverter, Sensor, PixelPitch, Pixels, MountChoice, DanjonL, Interval, Bracket, Blur,
+        Extinction, Gap, TimelapseInterval, FileSize, Start,
     ];
 }

@@ -1,112 +1,52 @@
-using System.Globalization;
 using System.Text.Json;
 using LunarShadow.Api.Validation;
-using LunarShadow.Astronomy.Shadow;
-using LunarShadow.Astronomy.Sites;
-using LunarShadow.Astronomy.Time;
 
 namespace LunarShadow.Api.Sites;
 
-/// <summary>The JSON body of a batch request, validated field by field with the same rules as the query string.</summary>
-internal sealed class BatchBody
+/// <summary>
+/// The JSON body of a batch request: the computation choices at the top and a "sites" list, each site an object of the
+/// same fields as the per-site query string, read by the same <see cref="SiteParameters"/>.
+/// </summary>
+/// <param name="Fields">The top-level fields (shadow, layerKm, deltaT, deltaTModel).</param>
+/// <param name="Sites">The sites; null when any is invalid.</param>
+/// <param name="TooLarge">Why the body is refused as too large, if it is.</param>
+internal sealed record BatchBody(IReadOnlyDictionary<string, string?> Fields, IReadOnlyList<SiteParameters>? Sites, string? TooLarge)
 {
-    public List<(Site Site, OpeningHours? Hours)>? Sites { get; private set; }
-
-    public ShadowModel? Model { get; private set; }
-
-    public IDeltaTModel? DeltaT { get; private set; }
-
-    public string? TooLarge { get; private set; }
+    /// <summary>The name of the list of sites.</summary>
+    public const string SitesName = "sites";
 
     public static async Task<BatchBody> ReadAsync(HttpRequest request, QueryReader reader, int maxBytes, int maxSites)
     {
-        var result = new BatchBody();
-        using var buffer = new MemoryStream();
-        var chunk = new byte[16 * 1024];
-        int read;
-        while ((read = await request.Body.ReadAsync(chunk)) > 0)
-        {
-            buffer.Write(chunk, 0, read);
-            if (buffer.Length > maxBytes)
-            {
-                result.TooLarge = $"The body may be at most {maxBytes / 1024} KiB.";
-                return result;
-            }
-        }
-        JsonDocument document;
-        try
-        {
-            document = JsonDocument.Parse(buffer.ToArray(), new JsonDocumentOptions { MaxDepth = 16 });
-        }
-        catch (JsonException e)
-        {
-            reader.Fail("body", $"body must be a JSON object {{\"sites\": [ … ]}}; it could not be read: {e.Message}");
-            return result;
-        }
+        var empty = new Dictionary<string, string?>();
+        var (document, tooLarge) = await JsonFields.ReadDocumentAsync(request, reader, maxBytes, maxDepth: 16);
+        if (tooLarge) return new BatchBody(empty, null, $"The body may be at most {maxBytes / 1024} KiB.");
+        if (document is null) return new BatchBody(empty, null, null);
         using (document)
         {
             var root = document.RootElement;
-            if (root.ValueKind != JsonValueKind.Object || !root.TryGetProperty("sites", out var sites) || sites.ValueKind != JsonValueKind.Array)
+            if (root.ValueKind != JsonValueKind.Object || !root.TryGetProperty(SitesName, out var sites) || sites.ValueKind != JsonValueKind.Array)
             {
-                reader.Fail("sites", "The body must be a JSON object with a \"sites\" array of site objects.");
-                return result;
+                reader.Fail(SitesName, "The body must be a JSON object with a \"sites\" array of site objects.");
+                return new BatchBody(empty, null, null);
             }
             if (sites.GetArrayLength() > maxSites)
-            {
-                result.TooLarge = $"A batch may hold at most {maxSites} sites; got {sites.GetArrayLength()}.";
-                return result;
-            }
-            if (sites.GetArrayLength() == 0) reader.Fail("sites", "sites must hold at least one site.");
-            result.Model = ShadowQuery.Read(reader, Text(root, "shadow", reader, ""), Text(root, "layerKm", reader, ""));
-            result.DeltaT = DeltaTQuery.Read(reader, Text(root, "deltaT", reader, ""), Text(root, "deltaTModel", reader, ""));
-            var parsed = new List<(Site, OpeningHours?)>();
+                return new BatchBody(empty, null, $"A batch may hold at most {maxSites} sites; got {sites.GetArrayLength()}.");
+            if (sites.GetArrayLength() == 0) reader.Fail(SitesName, "sites must hold at least one site.");
+            var fields = JsonFields.Of(root, reader);
+            var parsed = new List<SiteParameters>();
             var index = 0;
             foreach (var s in sites.EnumerateArray())
             {
-                var prefix = $"sites[{index++}].";
+                var prefix = $"{SitesName}[{index++}].";
                 if (s.ValueKind != JsonValueKind.Object)
                 {
                     reader.Fail(prefix.TrimEnd('.'), "Each site must be a JSON object with at least lat and lon.");
                     continue;
                 }
-                var fields = new SiteFields(Text(s, "lat", reader, prefix), Text(s, "lon", reader, prefix), Text(s, "elevation", reader, prefix),
-                    Text(s, "tz", reader, prefix), Text(s, "minAltitude", reader, prefix), Text(s, "horizon", reader, prefix),
-                    Text(s, "pressure", reader, prefix), Text(s, "temperature", reader, prefix), Text(s, "name", reader, prefix));
-                var site = SiteQuery.Read(reader, fields, required: true, prefix);
-                var hours = OpeningQuery.Read(reader, Text(s, "open", reader, prefix), prefix + "open");
-                if (site is not null) parsed.Add((site, hours));
+                var site = SiteParameters.Read(RequestFields.FromFields(JsonFields.Of(s, reader, prefix), reader, prefix));
+                if (site is not null) parsed.Add(site);
             }
-            if (reader.IsValid) result.Sites = parsed;
-        }
-        return result;
-    }
-
-    // A JSON number or string as invariant text, so the query-string rules apply unchanged.
-    private static string? Text(JsonElement element, string name, QueryReader reader, string prefix)
-    {
-        if (!element.TryGetProperty(name, out var value) || value.ValueKind == JsonValueKind.Null) return null;
-        switch (value.ValueKind)
-        {
-            case JsonValueKind.Number:
-                return value.GetRawText();
-            case JsonValueKind.String:
-                return value.GetString();
-            case JsonValueKind.Array when name == "horizon":
-                var points = new List<string>();
-                foreach (var p in value.EnumerateArray())
-                {
-                    if (p.ValueKind == JsonValueKind.Array && p.GetArrayLength() == 2 && p[0].ValueKind == JsonValueKind.Number && p[1].ValueKind == JsonValueKind.Number)
-                        points.Add(string.Create(CultureInfo.InvariantCulture, $"{p[0].GetDouble()}:{p[1].GetDouble()}"));
-                    else
-                    {
-                        reader.Fail(prefix + name, $"{prefix}{name} as an array must hold [azimuth, altitude] number pairs.");
-                        return null;
-                    }
-                }
-                return string.Join(',', points);
-            default:
-                reader.Fail(prefix + name, $"{prefix}{name} must be a number or a string; got a JSON {value.ValueKind.ToString().ToLowerInvariant()}.");
-                return null;
+            return new BatchBody(fields, reader.IsValid ? parsed : null, null);
         }
     }
 }

@@ -1,3 +1,5 @@
+using LunarShadow.Api.Common;
+
 namespace LunarShadow.Api.Sites;
 
 /// <summary>The next eclipses a site can see.</summary>
@@ -25,8 +27,12 @@ public sealed record UpcomingCriteriaEcho(string From, int Count, string Phase, 
 /// <param name="GreatestEclipseLocal">Greatest eclipse, local time.</param>
 /// <param name="QualifyingMinutes">Minutes of the chosen phase that meet every criterion.</param>
 /// <param name="Qualifying">Those stretches.</param>
-/// <param name="MaxVisibleUmbralMagnitude">Largest umbral magnitude seen.</param>
+/// <param name="GreatestVisibleUmbralMagnitude">Greatest umbral magnitude seen.</param>
 /// <param name="Summary">What the site sees, in one line.</param>
 public sealed record UpcomingItem(
     string Date, string Kind, string GreatestEclipseUtc, string GreatestEclipseLocal, double QualifyingMinutes,
-    IReadOnlyList<VisiblePhaseResponse> Qualifying, VisibleMagnitudeResponse? MaxVisibleUmbralMagnitude, string Summary);
+    IReadOnlyList<VisiblePhaseResponse> Qualifying, VisibleMagnitudeResponse? GreatestVisibleUmbralMagnitude, string Summary)
+{
+    /// <summary>Deprecated: the former name of <see cref="GreatestVisibleUmbralMagnitude"/>, written for one more release.</summary>
+    public VisibleMagnitudeResponse? MaxVisibleUmbralMagnitude => GreatestVisibleUmbralMagnitude;
+}

@@ -28,8 +28,8 @@ public class FuzzTests
         ("/api/v1/eclipses", ["from", "to", "kind", "shadow", "layerKm", "deltaT", "deltaTModel", "format"]),
         ("/api/v1/eclipses/{date}", ["shadow", "layerKm", "deltaT", "deltaTModel", "format"]),
         ("/api/v1/eclipses/{date}/local", ["lat", "lon", "elevation", "tz", "minAltitude", "horizon", "pressure", "temperature", "name", "open", "shadow", "deltaT", "format"]),
-        ("/api/v1/sites/upcoming", ["lat", "lon", "tz", "from", "count", "phase", "night", "open", "minAltitude", "format"]),
-        ("/api/v1/eclipses/{date}/photo-plan", ["lat", "lon", "tz", "iso", "aperture", "shutter", "focalLength", "teleconverter", "sensor", "pixelPitch", "pixels", "mount", "danjon", "interval", "bracket", "blur", "extinction", "gap", "timelapseInterval", "fileSize", "start", "format"]),
+        ("/api/v1/sites/upcoming", ["lat", "lon", "tz", "from", "count", "phase", "night", "open", "minAltitude", "pressure", "temperature", "horizon", "format"]),
+        ("/api/v1/eclipses/{date}/photo-plan", ["lat", "lon", "tz", "iso", "aperture", "shutter", "focalLength", "teleconverter", "sensor", "pixelPitch", "pixels", "mount", "danjon", "danjonL", "pressure", "temperature", "interval", "bracket", "blur", "extinction", "gap", "timelapseInterval", "fileSize", "start", "format"]),
     ];
 
     private static readonly string[] Dates = ["2025-03-14", "2022-11-08", "2025-03-15", "abc", "-1999-06-26", "2025-02-30", "99999-01-01", "%20"];

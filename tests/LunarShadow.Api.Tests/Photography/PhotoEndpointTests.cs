@@ -22,7 +22,8 @@ public class PhotoEndpointTests(ApiFactory factory) : IClassFixture<ApiFactory>
             Assert.True(rows[0].GetProperty("exposure").TryGetProperty(field, out _), field);
         Assert.Contains(rows, r => r.GetProperty("phase").GetString() == "total");
         Assert.All(rows, r => Assert.Contains(r.GetProperty("phase").GetString(), new[] { "uneclipsed", "penumbral", "partial", "total" }));
-        Assert.Equal(2.5, p.GetProperty("model").GetProperty("danjon").GetDouble());
+        Assert.Equal(2.5, p.GetProperty("model").GetProperty("danjonL").GetDouble());
+        Assert.Equal(2.5, p.GetProperty("model").GetProperty("danjon").GetDouble()); // the former name, kept for one release
         Assert.Equal("sidereal", p.GetProperty("camera").GetProperty("mount").GetString());
         Assert.True(p.GetProperty("framing").GetProperty("moonDiameterPixels").GetDouble() > 500);
         Assert.True(p.GetProperty("sequences").GetProperty("timeLapse").GetProperty("frames").GetInt32() > 100);

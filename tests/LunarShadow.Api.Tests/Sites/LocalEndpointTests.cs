@@ -30,7 +30,8 @@ public class LocalEndpointTests(ApiFactory factory) : IClassFixture<ApiFactory>
         var phases = l.GetProperty("visiblePhases").EnumerateArray().ToList();
         Assert.Equal(set.GetProperty("utc").GetString(), phases.Single(p => p.GetProperty("phase").GetString() == "partial").GetProperty("endUtc").GetString());
         Assert.Equal(0, l.GetProperty("visibleTotalityMinutes").GetDouble());
-        Assert.True(l.GetProperty("maxVisibleUmbralMagnitude").GetProperty("value").GetDouble() < 1);
+        Assert.True(l.GetProperty("greatestVisibleUmbralMagnitude").GetProperty("value").GetDouble() < 1);
+        Assert.Equal(l.GetProperty("greatestVisibleUmbralMagnitude").GetRawText(), l.GetProperty("maxVisibleUmbralMagnitude").GetRawText()); // former name, one release
         Assert.Contains("lost from view", l.GetProperty("summary").GetString(), StringComparison.Ordinal);
     }
 

@@ -3,6 +3,7 @@ using System.Text.Json;
 using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Photography;
 using LunarShadow.Api.Sites;
+using LunarShadow.Api.Common;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Photography;
 using LunarShadow.Astronomy.Sites;
@@ -52,8 +53,13 @@ internal static class Renderings
         Execute(UpcomingEndpoints.Calendar(found, site, SweepGrid.Time, new QueryReader()));
 
     /// <summary>The visibility map as served: the endpoint's handler for one date, in GeoJSON.</summary>
-    public static (int Status, string Body) VisibilityMap(string date) =>
-        Execute(Api.Eclipses.VisibilityMapEndpoints.Get(NewContext().Request, date, new ModelParameters(null, null, null, null), "geojson"));
+    public static (int Status, string Body) VisibilityMap(string date)
+    {
+        var request = NewContext().Request;
+        request.RouteValues["date"] = date;
+        request.QueryString = new QueryString("?format=geojson");
+        return Execute(Api.Eclipses.VisibilityMapEndpoints.Get(request));
+    }
 
     private static DefaultHttpContext NewContext() => new() { RequestServices = Services };
 

@@ -1,6 +1,7 @@
 using System.Text.Json;
 using LunarShadow.Api.Photography;
 using LunarShadow.Api.Sites;
+using LunarShadow.Api.Common;
 using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Photography;
 using LunarShadow.Astronomy.Sites;

@@ -1,10 +1,9 @@
-using LunarShadow.Api.Eclipses;
 using LunarShadow.Api.Formatting;
 using LunarShadow.Astronomy.Sites;
 using LunarShadow.Astronomy.Time;
 using NodaTime;
 
-namespace LunarShadow.Api.Sites;
+namespace LunarShadow.Api.Common;
 
 /// <summary>Turns local circumstances into contracts, CSV and iCalendar.</summary>
 internal static class LocalMapping
@@ -16,7 +15,7 @@ internal static class LocalMapping
         var deltaT = time.DeltaTAt(l.Eclipse.GreatestEclipse);
         return new LocalResponse(
             Echo(l.Site),
-            new EclipseBrief(TimeFormats.UtcDate(time.ToUtc(l.Eclipse.GreatestEclipse)), EclipseMapping.KindName(l.Eclipse.Kind),
+            new EclipseBrief(TimeFormats.UtcDate(time.ToUtc(l.Eclipse.GreatestEclipse)), WireNames.Of(l.Eclipse.Kind),
                 TimeFormats.Utc(time.ToUtc(l.Eclipse.GreatestEclipse)), TimeFormats.Round(l.Eclipse.UmbralMagnitude, 5), l.Eclipse.Model.Name),
             TimeFormats.Round(deltaT.Seconds, 1),
             TimeFormats.Round(deltaT.UncertaintySeconds, 1),
@@ -25,16 +24,11 @@ internal static class LocalMapping
                 var (local, note) = TimeFormats.Local(c.Utc, zone);
                 return new LocalContactResponse(c.Label, TimeFormats.Utc(c.Utc), local, note,
                     TimeFormats.Round(c.Moon.ApparentAltitude.Degrees, 2), TimeFormats.Round(c.Moon.Azimuth.Degrees, 2), c.Visible,
-                    TimeFormats.Round(c.SunAltitude.Degrees, 2), SkyName(c.Sky),
+                    TimeFormats.Round(c.SunAltitude.Degrees, 2), WireNames.Of(c.Sky),
                     c.ZenithPositionAngle is { } z ? TimeFormats.Round(z.Degrees, 1) : null);
             }).ToList(),
-            l.MoonEvents.Select(e => new MoonEventResponse(EventName(e.Type), TimeFormats.Utc(e.Utc), Local(e.Utc), TimeFormats.Round(e.Azimuth, 2))).ToList(),
-            l.HorizonState switch
-            {
-                MoonHorizonState.UpThroughout => "up-throughout",
-                MoonHorizonState.DownThroughout => "down-throughout",
-                _ => "rises-or-sets",
-            },
+            l.MoonEvents.Select(e => new MoonEventResponse(WireNames.Of(e.Type), TimeFormats.Utc(e.Utc), Local(e.Utc), TimeFormats.Round(e.Azimuth, 2))).ToList(),
+            WireNames.Of(l.HorizonState),
             l.VisiblePhases.Select(p => Phase(p, zone)).ToList(),
             TimeFormats.Round(l.VisibleMinutes(EclipsePhase.Total), 2),
             l.MaxVisibleUmbralMagnitude is { } m
@@ -78,32 +72,8 @@ internal static class LocalMapping
         site.TimeZone == DateTimeZone.Utc ? "No time zone given: local times are in UTC. Pass tz=Area/City (IANA), e.g. tz=Europe/Vienna." : null);
 
     public static VisiblePhaseResponse Phase(VisibleSpan p, DateTimeZone zone) => new(
-        PhaseName(p.Phase), TimeFormats.Utc(p.StartUtc), TimeFormats.Utc(p.EndUtc),
+        WireNames.Of(p.Phase), TimeFormats.Utc(p.StartUtc), TimeFormats.Utc(p.EndUtc),
         TimeFormats.Local(p.StartUtc, zone).Text, TimeFormats.Local(p.EndUtc, zone).Text, TimeFormats.Round(p.Minutes, 2));
-
-    public static string PhaseName(EclipsePhase phase) => phase switch
-    {
-        EclipsePhase.Total => "total",
-        EclipsePhase.Partial => "partial",
-        _ => "penumbral",
-    };
-
-    private static string EventName(MoonEventType type) => type switch
-    {
-        MoonEventType.Rise => "rise",
-        MoonEventType.Set => "set",
-        MoonEventType.ClearsHorizonProfile => "clears-horizon-profile",
-        _ => "hidden-by-horizon-profile",
-    };
-
-    private static string SkyName(SkyState sky) => sky switch
-    {
-        SkyState.Day => "day",
-        SkyState.CivilTwilight => "civil-twilight",
-        SkyState.NauticalTwilight => "nautical-twilight",
-        SkyState.AstronomicalTwilight => "astronomical-twilight",
-        _ => "night",
-    };
 
     // Common practice for eclipse outreach: warn about the Sun whenever it is up or just set (or about to rise) while
     // the eclipsed Moon is low on the opposite horizon, and about the dark for every visible night-time eclipse.

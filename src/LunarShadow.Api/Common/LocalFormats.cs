@@ -2,7 +2,7 @@ using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Sites;
 
-namespace LunarShadow.Api.Sites;
+namespace LunarShadow.Api.Common;
 
 /// <summary>CSV and iCalendar representations of local circumstances.</summary>
 internal static class LocalFormats
@@ -28,7 +28,7 @@ internal static class LocalFormats
             double Minutes(string phase) => r.VisiblePhases.Where(p => p.Phase == phase).Sum(p => p.Minutes);
             csv.Row(r.Site.Name, r.Site.LatitudeDegrees, r.Site.LongitudeDegrees, r.Site.TimeZone, r.Eclipse.Date, whole.Count > 0 ? "true" : "false",
                 whole.FirstOrDefault()?.StartUtc, whole.LastOrDefault()?.EndUtc, Minutes("penumbral"), Minutes("partial"), Minutes("total"),
-                r.MaxVisibleUmbralMagnitude?.Value, r.MaxVisibleUmbralMagnitude?.Utc, r.MaxVisibleUmbralMagnitude?.AltitudeDegrees, r.MoonHorizon, r.Summary);
+                r.GreatestVisibleUmbralMagnitude?.Value, r.GreatestVisibleUmbralMagnitude?.Utc, r.GreatestVisibleUmbralMagnitude?.AltitudeDegrees, r.MoonHorizon, r.Summary);
         }
         return csv.ToString();
     }
@@ -47,7 +47,7 @@ internal static class LocalFormats
         var calendar = new ICalendarWriter($"Lunar eclipse {response.Eclipse.Date} at {where}");
         foreach (var p in local.VisiblePhases.OrderBy(p => p.StartUtc))
         {
-            var phase = LocalMapping.PhaseName(p.Phase);
+            var phase = WireNames.Of(p.Phase);
             var uid = FormattableString.Invariant($"{response.Eclipse.Date}-{phase}-{p.StartUtc.ToUnixTimeSeconds()}-{site.Location.Latitude.Degrees:0.####}-{site.Location.Longitude.Degrees:0.####}@lunarshadow");
             calendar.Event(uid, local.Contacts.Single(c => c.Name is null).Utc, p.StartUtc, p.EndUtc,
                 $"Lunar eclipse ({response.Eclipse.Kind}): {phase} phase visible",

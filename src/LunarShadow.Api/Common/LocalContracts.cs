@@ -1,4 +1,4 @@
-namespace LunarShadow.Api.Sites;
+namespace LunarShadow.Api.Common;
 
 /// <summary>What one site sees of one eclipse.</summary>
 /// <param name="Site">The site as understood (echo).</param>
@@ -10,7 +10,7 @@ namespace LunarShadow.Api.Sites;
 /// <param name="MoonHorizon">rises-or-sets, up-throughout or down-throughout (within 12 hours of greatest eclipse).</param>
 /// <param name="VisiblePhases">Visible stretches of each phase: penumbral (P1–P4), partial (U1–U4), total (U2–U3).</param>
 /// <param name="VisibleTotalityMinutes">Minutes of totality visible from the site.</param>
-/// <param name="MaxVisibleUmbralMagnitude">Largest umbral magnitude seen, or null when nothing is seen.</param>
+/// <param name="GreatestVisibleUmbralMagnitude">Greatest umbral magnitude seen, or null when nothing is seen.</param>
 /// <param name="Summary">One plain line on what the site sees.</param>
 /// <param name="PublicNight">The plan within the opening hours, when <c>open</c> was given.</param>
 /// <param name="Cautions">Safety notes that apply to this night.</param>
@@ -25,11 +25,15 @@ public sealed record LocalResponse(
     string MoonHorizon,
     IReadOnlyList<VisiblePhaseResponse> VisiblePhases,
     double VisibleTotalityMinutes,
-    VisibleMagnitudeResponse? MaxVisibleUmbralMagnitude,
+    VisibleMagnitudeResponse? GreatestVisibleUmbralMagnitude,
     string Summary,
     PublicNightResponse? PublicNight,
     IReadOnlyList<string> Cautions,
-    IReadOnlyList<TrackPointResponse>? Track = null);
+    IReadOnlyList<TrackPointResponse>? Track = null)
+{
+    /// <summary>Deprecated: the former name of <see cref="GreatestVisibleUmbralMagnitude"/>, written for one more release.</summary>
+    public VisibleMagnitudeResponse? MaxVisibleUmbralMagnitude => GreatestVisibleUmbralMagnitude;
+}
 
 /// <summary>One sample of the night.</summary>
 /// <param name="Utc">UTC.</param>
