@@ -28,3 +28,14 @@ for (const [lat, lon, start] of cases) {
   const set = Astronomy.SearchRiseSet(Astronomy.Body.Moon, observer, -1, t0, 2);
   console.log(JSON.stringify({ lat, lon, start, rise: rise?.date.toISOString(), set: set?.date.toISOString() }));
 }
+
+// Almanac convention (metersAboveGround 0) and sea horizon (metersAboveGround = height) for elevated sites.
+for (const [lat, lon, height, start] of [[47.3, 8.2, 550, '2029-12-20T00:00:00Z'], [46.55, 7.98, 3000, '2025-03-14T00:00:00Z'], [-33.87, 151.2, 100, '2025-03-14T00:00:00Z']]) {
+  const observer = new Astronomy.Observer(lat, lon, height);
+  const t0 = Astronomy.MakeTime(new Date(start));
+  for (const ground of [0, height]) {
+    const rise = Astronomy.SearchRiseSet(Astronomy.Body.Moon, observer, +1, t0, 1.5, ground);
+    const set = Astronomy.SearchRiseSet(Astronomy.Body.Moon, observer, -1, t0, 1.5, ground);
+    console.log(JSON.stringify({ lat, lon, height, metersAboveGround: ground, rise: rise?.date.toISOString(), set: set?.date.toISOString() }));
+  }
+}

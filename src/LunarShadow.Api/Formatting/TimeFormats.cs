@@ -17,6 +17,16 @@ internal static partial class TimeFormats
     /// <summary>A UTC instant, e.g. 2025-03-14T06:58:00.000Z or -1999-06-26T13:00:00.000Z.</summary>
     public static string Utc(Instant instant) => Write(ToMillisecond(instant).ToJulianDate(), "Z");
 
+    /// <summary>
+    /// The instant rounded to the millisecond (half away from zero) in whole ticks: UTC and local times are both written
+    /// from it, so they always agree to the millisecond.
+    /// </summary>
+    public static Instant ToMillisecond(Instant instant)
+    {
+        var ms = Math.DivRem(instant.ToUnixTimeTicks(), 10_000, out var rest);
+        return Instant.FromUnixTimeMilliseconds(rest >= 5_000 ? ms + 1 : rest <= -5_000 ? ms - 1 : ms);
+    }
+
     /// <summary>A TT instant without a zone, e.g. 2025-03-14T06:59:09.184.</summary>
     public static string Tt(TtInstant tt) => Write(tt.JulianDate.Day, "");
 
@@ -26,8 +36,12 @@ internal static partial class TimeFormats
     /// </summary>
     public static (string Text, string? Note) Local(Instant instant, DateTimeZone zone)
     {
+        instant = ToMillisecond(instant);
         var offset = zone.GetUtcOffset(instant);
-        var seconds = offset.Seconds;
+        // ISO 8601 offsets carry whole minutes: a local mean time offset such as +00:13:35 (zones before standard time)
+        // is written rounded to the minute, and the wall time is computed with the offset written, so the text always
+        // names the same instant as the UTC.
+        var seconds = (int)Math.Round(offset.Seconds / 60.0, MidpointRounding.AwayFromZero) * 60;
         var sign = seconds < 0 ? '-' : '+';
         var abs = Math.Abs(seconds);
         // Round the instant to the millisecond before shifting it, so that the local text is exactly the UTC text plus the offset.
@@ -35,10 +49,6 @@ internal static partial class TimeFormats
         return (text, SiteWording.RepeatedTimeNote(instant, zone));
     }
 
-    // A Julian date in a double resolves about 40 µs today, so each text is written from an instant already rounded to
-    // the millisecond; Write's own rounding then only undoes the double's error.
-    private static Instant ToMillisecond(Instant instant) =>
-        Instant.FromUnixTimeTicks((long)Math.Round(instant.ToUnixTimeTicks() / 10_000.0, MidpointRounding.AwayFromZero) * 10_000);
 
     /// <summary>The calendar date (astronomers' calendar) of a UTC instant, YYYY-MM-DD.</summary>
     public static string UtcDate(Instant instant) => Write(ToMillisecond(instant).ToJulianDate(), "")[..DateLength(ToMillisecond(instant).ToJulianDate())];

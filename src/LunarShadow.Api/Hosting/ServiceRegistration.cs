@@ -33,11 +33,12 @@ internal static class ServiceRegistration
             options.SizeLimit = builder.Configuration.GetValue("OutputCacheMegabytes", 128L) * 1024 * 1024;
         });
         builder.Services.AddProblemDetails();
-        // Numbers are written and read as JSON numbers only, so the OpenAPI schema shows them as such.
+        // Numbers are written and read as JSON numbers only, so the OpenAPI schema shows them as such; a NaN or an
+        // infinity throws rather than becoming null.
         // Enum values are written under the one naming policy the mappings and the OpenAPI enums use.
         builder.Services.ConfigureHttpJsonOptions(options =>
         {
-            options.SerializerOptions.NumberHandling = JsonNumberHandling.Strict;
+            Formatting.FiniteNumbers.Configure(options.SerializerOptions);
             options.SerializerOptions.Converters.Add(new JsonStringEnumConverter(Common.WireNames.Policy, allowIntegerValues: false));
         });
         // Parameters, bodies and response enums come from the same tables the handlers and mappings use.

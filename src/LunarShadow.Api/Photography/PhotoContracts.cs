@@ -24,7 +24,10 @@ public sealed record PhotoPlanResponse(
 /// <param name="Iso">ISO asked for (null when the shutter was fixed).</param>
 /// <param name="ShutterSeconds">Fixed shutter, if given.</param>
 /// <param name="Mount">fixed, sidereal or lunar.</param>
-public sealed record CameraEcho(double SensorWidthMm, double SensorHeightMm, double PixelPitchMicrons, double FocalLengthMm, double Aperture, double? Iso, double? ShutterSeconds, string Mount);
+/// <param name="FastestShutterSeconds">The camera's fastest shutter, s.</param>
+/// <param name="SlowestShutterSeconds">The camera's slowest timed shutter, s.</param>
+public sealed record CameraEcho(double SensorWidthMm, double SensorHeightMm, double PixelPitchMicrons, double FocalLengthMm, double Aperture, double? Iso, double? ShutterSeconds, string Mount,
+    double FastestShutterSeconds, double SlowestShutterSeconds);
 
 /// <summary>The brightness model used.</summary>
 /// <param name="DanjonL">Expected Danjon luminosity L.</param>
@@ -51,10 +54,17 @@ public sealed record BrightnessModelEcho(double DanjonL, double ExtinctionPerAir
 /// <param name="LimbStops">The brightest limb point, stops (eclipse only).</param>
 /// <param name="DiscStops">The disc's mean, stops (eclipse only).</param>
 /// <param name="Exposure">Suggested exposure.</param>
-/// <param name="Warnings">Things to watch.</param>
+/// <param name="Warnings">Things to watch, in words.</param>
+/// <param name="WarningDetails">The same as codes with their numbers, for programs.</param>
 public sealed record TimelineRowResponse(
     string Utc, string Local, string? Contact, string Phase, double UmbralFraction, double PenumbralFraction, double MoonAltitudeDegrees,
-    double MoonAzimuthDegrees, double Airmass, double BrightnessStops, double LimbStops, double DiscStops, ExposureResponse Exposure, IReadOnlyList<string> Warnings);
+    double MoonAzimuthDegrees, double Airmass, double BrightnessStops, double LimbStops, double DiscStops, ExposureResponse Exposure, IReadOnlyList<string> Warnings,
+    IReadOnlyList<WarningResponse> WarningDetails);
+
+/// <summary>A warning as a code and its numbers.</summary>
+/// <param name="Code">moon-below-horizon, low-altitude, daylight, twilight-sky, sky-limits-exposure, trailing, leaving-frame, aperture-closed, iso-changed, beyond-fastest-shutter, beyond-slowest-shutter or iso-out-of-range.</param>
+/// <param name="Numbers">Its numbers by name (see docs/photography.md).</param>
+public sealed record WarningResponse(string Code, IReadOnlyDictionary<string, double> Numbers);
 
 /// <summary>A suggested exposure.</summary>
 /// <param name="ShutterSeconds">Shutter, s.</param>

@@ -18,7 +18,7 @@ internal static class PhotoMapping
         return new PhotoPlanResponse(
             local.Site, local.Eclipse, local.Night,
             new CameraEcho(c.SensorWidthMm, c.SensorHeightMm, TimeFormats.Round(c.PixelPitchMicrons, 3), c.EffectiveFocalLengthMm, c.EffectiveAperture,
-                c.ShutterSeconds is null ? c.Iso : null, c.ShutterSeconds, PhotoParameters.Mounts.First(m => m.Value == c.Mount).Key),
+                c.ShutterSeconds is null ? c.Iso : null, c.ShutterSeconds, PhotoParameters.Mounts.First(m => m.Value == c.Mount).Key, c.FastestShutterSeconds, c.SlowestShutterSeconds),
             local.Summary,
             new BrightnessModelEcho(plan.Settings.Danjon, TimeFormats.Round(plan.ExtinctionPerAirMass, 4), plan.UncertaintyStops, SiteWording.BrightnessModelNote),
             plan.Timeline.Select(r => new TimelineRowResponse(
@@ -28,7 +28,8 @@ internal static class PhotoMapping
                 TimeFormats.Round(r.BrightnessStops, 2), TimeFormats.Round(r.LimbStops, 2), TimeFormats.Round(r.DiscStops, 2),
                 new ExposureResponse(Seconds(r.Exposure.ShutterSeconds), Math.Round(r.Exposure.Iso), r.Exposure.Aperture, TimeFormats.Round(r.Exposure.Ev100, 2),
                     plan.Settings.BracketStops, r.Exposure.BracketShutters.Select(Seconds).ToList()),
-                r.Warnings)).ToList(),
+                r.Warnings.Select(PhotoWarningText.Sentence).ToList(),
+                r.Warnings.Select(w => new WarningResponse(PhotoWarningText.Code(w.Code), w.Numbers.ToDictionary(n => n.Key, n => TimeFormats.Round(n.Value, 4)))).ToList())).ToList(),
             new FramingResponse(TimeFormats.Round(f.FieldWidth.Degrees, 3), TimeFormats.Round(f.FieldHeight.Degrees, 3), TimeFormats.Round(f.MoonDiameterPixels, 1),
                 TimeFormats.Round(f.MoonFractionOfFrameHeight, 4), f.TrailingLimitSeconds is { } t ? Seconds(t) : null,
                 Seconds(f.FixedTripodLimitSeconds), Seconds(f.SiderealLimitSeconds), f.MinutesInFixedFrame),

@@ -21,6 +21,18 @@ internal static class PhotoParameters
         Unit = "seconds", Minimum = 1.0 / 8000, Maximum = 3600,
     };
 
+    public static readonly Parameter FastestShutter = new("fastestShutter", ParameterType.Number,
+        "The camera's fastest shutter; faster exposures are avoided by closing the aperture (to f/16) and lowering the ISO (to 100).")
+    {
+        Unit = "seconds", Minimum = 1.0 / 64000, Maximum = 1, Default = Astronomy.Photography.Camera.DefaultFastestShutterSeconds,
+    };
+
+    public static readonly Parameter SlowestShutter = new("slowestShutter", ParameterType.Number,
+        "The camera's slowest timed shutter; longer exposures are avoided by raising the ISO (to 25600).")
+    {
+        Unit = "seconds", Minimum = 1.0 / 64000, Maximum = 3600, Default = Astronomy.Photography.Camera.DefaultSlowestShutterSeconds,
+    };
+
     public static readonly Parameter FocalLength = new("focalLength", ParameterType.Number, "Lens focal length.")
     {
         Unit = "mm", Minimum = 0, MinimumExclusive = true, Maximum = 10000, Default = 400.0,
@@ -110,7 +122,7 @@ internal static class PhotoParameters
     /// <summary>The camera and plan fields, in the order the document lists them.</summary>
     public static readonly IReadOnlyList<Parameter> Camera =
     [
-        Iso, Aperture, Shutter, FocalLength, Teleconverter, Sensor, PixelPitch, Pixels, MountChoice, DanjonL, Interval, Bracket, Blur,
+        Iso, Aperture, Shutter, FastestShutter, SlowestShutter, FocalLength, Teleconverter, Sensor, PixelPitch, Pixels, MountChoice, DanjonL, Interval, Bracket, Blur,
         Extinction, Gap, TimelapseInterval, FileSize, Start,
     ];
 }

@@ -14,6 +14,11 @@ internal static class PhotoRequest
         var iso = f.Number(P.Iso)!.Value;
         var aperture = f.Number(P.Aperture)!.Value;
         var shutter = f.Number(P.Shutter);
+        var fastest = f.Number(P.FastestShutter)!.Value;
+        var slowest = f.Number(P.SlowestShutter)!.Value;
+        if (slowest < fastest) f.Reader.Fail("slowestShutter", "slowestShutter must be at least fastestShutter.");
+        else if (shutter is { } t && (t < fastest || t > slowest))
+            f.Reader.Fail("shutter", FormattableString.Invariant($"shutter must lie within the camera's range, fastestShutter {fastest:0.######} s to slowestShutter {slowest:0.###} s; got {t:0.######} s."));
         var focal = f.Number(P.FocalLength)!.Value;
         var multiplier = f.Number(P.Teleconverter)!.Value;
         var (width, height) = Sensor(f);
@@ -32,7 +37,7 @@ internal static class PhotoRequest
         if (!f.Reader.IsValid) return (null, null);
 
         var pixelPitch = pitch ?? width / pixels * 1000;
-        var camera = new Camera(width, height, pixelPitch, focal, multiplier, mount, iso, aperture, shutter);
+        var camera = new Camera(width, height, pixelPitch, focal, multiplier, mount, iso, aperture, shutter, fastest, slowest);
         var settings = new PhotoSettings(danjon, interval, bracket, blur, extinction, gap, lapse, fileSize,
             start is { } s ? time.ToTerrestrialTime(s) : null);
         return (camera, settings);

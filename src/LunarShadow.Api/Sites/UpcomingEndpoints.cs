@@ -67,14 +67,7 @@ internal static class UpcomingEndpoints
         var aborted = request.HttpContext.RequestAborted;
         // Stops at the request's deadline or when the client goes away (checked per eclipse scanned).
         var found = UpcomingEclipses.From(request.FinderFor(model), site.Site, time, startTt, criteria, aborted).Take(wanted).ToList();
-        var items = found.Select(u =>
-        {
-            var full = LocalMapping.ToResponse(u.Local, time, null);
-            var greatest = time.ToUtc(u.Local.Eclipse.GreatestEclipse);
-            return new UpcomingItem(full.Eclipse.Date, full.Eclipse.Kind, full.Night, TimeFormats.Utc(greatest), TimeFormats.Local(greatest, site.Site.TimeZone).Text,
-                TimeFormats.Round(u.QualifyingMinutes, 2), u.Qualifying.Select(q => LocalMapping.Phase(q, site.Site.TimeZone)).ToList(),
-                full.GreatestVisibleUmbralMagnitude, full.Summary);
-        }).ToList();
+        var items = found.Select(u => Item(u, site.Site, time)).ToList();
         var note = items.Count < wanted
             ? $"Only {items.Count} such eclipses in the {UpcomingEclipses.MaxYearsAhead} years searched (or up to the year {SupportedRange.LastYear})."
             : null;
@@ -99,5 +92,15 @@ internal static class UpcomingEndpoints
     {
         var today = clock.GetCurrentInstant().InUtc().Date;
         return new CalendarDate(today.Year, today.Month, today.Day, true);
+    }
+
+    /// <summary>One entry of the list: the eclipse, its night and greatest eclipse, and the stretches that qualify.</summary>
+    internal static UpcomingItem Item(UpcomingEclipse u, Site site, TimeScaleConverter time)
+    {
+        var full = LocalMapping.ToResponse(u.Local, time, null);
+        var greatest = time.ToUtc(u.Local.Eclipse.GreatestEclipse);
+        return new UpcomingItem(full.Eclipse.Date, full.Eclipse.Kind, full.Night, TimeFormats.Utc(greatest), TimeFormats.Local(greatest, site.TimeZone).Text,
+            TimeFormats.Round(u.QualifyingMinutes, 2), u.Qualifying.Select(q => LocalMapping.Phase(q, site.TimeZone)).ToList(),
+            full.GreatestVisibleUmbralMagnitude, full.Summary);
     }
 }

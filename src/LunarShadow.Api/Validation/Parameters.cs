@@ -52,9 +52,9 @@ internal static class Parameters
     public const int MaxHorizonPoints = 360;
 
     public static readonly Parameter Horizon = new("horizon", ParameterType.Text,
-        $"Local horizon profile: azimuth:altitude pairs in degrees, comma-separated, e.g. 90:5,180:12,270:3 (azimuth 0–360 from north through east, altitude −5 to 90; up to {MaxHorizonPoints} points; linear between them). In a JSON body also an array of [azimuth, altitude] pairs.")
+        $"Local horizon profile: azimuth:altitude pairs in degrees, comma-separated, e.g. 90:5,180:12,270:3 (azimuth 0–360 from north through east, altitude −5 to 90; up to {MaxHorizonPoints} points; linear between them). In a JSON body also an array of [azimuth, altitude] pairs. Or sea: a flat sea horizon lowered by the dip for the site's elevation; without it rise and set follow the almanac convention (upper limb at 0° with refraction, no dip).")
     {
-        Pattern = @"^\s*-?[0-9.]+\s*:\s*-?[0-9.]+\s*(,\s*-?[0-9.]+\s*:\s*-?[0-9.]+\s*)*$",
+        Pattern = @"^\s*(sea|-?[0-9.]+\s*:\s*-?[0-9.]+\s*(,\s*-?[0-9.]+\s*:\s*-?[0-9.]+\s*)*)\s*$",
     };
 
     public static readonly Parameter Pressure = new("pressure", ParameterType.Number, "Air pressure at the site, for refraction.")

@@ -36,12 +36,13 @@ internal sealed partial record SiteParameters(Site Site, OpeningHours? Hours)
         var temperature = f.Number(Parameters.Temperature)!.Value;
         var minimum = f.Number(Parameters.MinAltitude)!.Value;
         var zone = TimeZone(f);
-        var horizon = Horizon(f);
+        var sea = string.Equals(f.Raw(Parameters.Horizon)?.Trim(), "sea", StringComparison.OrdinalIgnoreCase);
+        var horizon = sea ? HorizonProfile.Flat : Horizon(f);
         var name = f.Raw(Parameters.SiteName);
         if (name is { Length: > 200 }) f.Fail(Parameters.SiteName, $"{f.FieldName(Parameters.SiteName)} may be at most {Parameters.SiteName.MaxLength} characters.");
         if (latitude is null || longitude is null || zone is null || horizon is null) return null;
         return new Site(GeodeticLocation.FromDegrees(latitude.Value, longitude.Value, elevation), zone, horizon,
-            Angle.FromDegrees(minimum), new AirConditions(pressure, temperature), string.IsNullOrWhiteSpace(name) ? null : name.Trim());
+            Angle.FromDegrees(minimum), new AirConditions(pressure, temperature), string.IsNullOrWhiteSpace(name) ? null : name.Trim(), sea);
     }
 
     private static DateTimeZone? TimeZone(RequestFields f)

@@ -23,10 +23,20 @@ public enum Mount
 /// <param name="Iso">ISO speed (ignored when <paramref name="ShutterSeconds"/> is given: the ISO is then computed).</param>
 /// <param name="Aperture">f-number.</param>
 /// <param name="ShutterSeconds">A fixed shutter time, or null to compute the shutter for the ISO.</param>
+/// <param name="FastestShutterSeconds">The camera's fastest settable shutter, s (default 1/8000).</param>
+/// <param name="SlowestShutterSeconds">The camera's slowest timed shutter, s (default 30).</param>
 public sealed record Camera(
     double SensorWidthMm, double SensorHeightMm, double PixelPitchMicrons, double FocalLengthMm, double FocalMultiplier,
-    Mount Mount, double Iso, double Aperture, double? ShutterSeconds = null)
+    Mount Mount, double Iso, double Aperture, double? ShutterSeconds = null,
+    double FastestShutterSeconds = Camera.DefaultFastestShutterSeconds, double SlowestShutterSeconds = Camera.DefaultSlowestShutterSeconds)
 {
+    // Common practice: the timed shutter range of current interchangeable-lens cameras is 1/8000 s to 30 s.
+    /// <summary>The default fastest shutter, s.</summary>
+    public const double DefaultFastestShutterSeconds = 1.0 / 8000;
+
+    /// <summary>The default slowest timed shutter, s.</summary>
+    public const double DefaultSlowestShutterSeconds = 30;
+
     /// <summary>Effective focal length, mm.</summary>
     public double EffectiveFocalLengthMm => FocalLengthMm * FocalMultiplier;
 

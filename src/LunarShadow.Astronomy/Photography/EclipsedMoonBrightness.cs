@@ -14,7 +14,10 @@ public static class EclipsedMoonBrightness
     /// <summary>
     /// Relative brightness of a point of the Moon at angular distance ρ (radians) from the shadow axis. The shadow radii
     /// fix the geometry: seen from that point the Earth's disc has radius E = (ρᵤ + ρₚ)/2 − π☉, the Sun's S = (ρₚ − ρᵤ)/2,
-    /// and their centres are ρ − π☉ apart.
+    /// and their centres are ρ − π☉ apart. The light refracted by the atmosphere does not stop at the umbra's edge: it
+    /// lights the limb at U2 and U3, where the direct sunlight is just gone, and outside the umbra it is held at its edge
+    /// value (some 8 magnitudes below the direct light, so it matters only where that light vanishes). The brightness is
+    /// therefore continuous and strictly positive through every contact.
     /// </summary>
     public static double AtPoint(double rho, ShadowRadii radii, double sunParallax, double danjon)
     {
@@ -22,7 +25,7 @@ public static class EclipsedMoonBrightness
         var earth = 0.5 * (u + p) - sunParallax;
         var sun = 0.5 * (p - u);
         var direct = 1 - SolarDiscOcculting.HiddenFraction(earth, sun, Math.Abs(rho - sunParallax));
-        var refracted = rho < u ? Math.Pow(10, -0.4 * UmbralGlow.DimmingMagnitudes(rho / u, danjon)) : 0;
+        var refracted = u > 0 ? Math.Pow(10, -0.4 * UmbralGlow.DimmingMagnitudes(rho / u, danjon)) : 0;
         return direct + refracted;
     }
 

@@ -39,7 +39,7 @@ public enum MoonPhaseState
 public sealed record TimelineRow(
     TtInstant Tt, Instant Utc, string? Contact, MoonPhaseState Phase, double UmbralFraction, double PenumbralFraction,
     Angle Altitude, Angle Azimuth, double AirMass, double BrightnessStops, double LimbStops, double DiscStops,
-    Exposure Exposure, IReadOnlyList<string> Warnings);
+    Exposure Exposure, IReadOnlyList<PhotoWarning> Warnings);
 
 /// <summary>A photo plan for one eclipse, one site and one camera.</summary>
 /// <param name="Local">What the site sees.</param>

@@ -38,9 +38,10 @@ public static class PhotoPlanner
             var g = passage.At(passage.HoursFromCenter(tt));
             var radii = ShadowCrossSection.RadiiTowardMoon(eclipse.Model, g);
             var (d, s) = (g.Separation.Radians, g.MoonSemiDiameter.Radians);
-            var state = d <= radii.Umbra.Radians - s ? MoonPhaseState.Total
+            // A row at a contact belongs to the phase that starts there (at U2 the Moon is just wholly inside the umbra).
+            var state = StartingPhase(label) ?? (d <= radii.Umbra.Radians - s ? MoonPhaseState.Total
                 : d < radii.Umbra.Radians + s ? MoonPhaseState.Partial
-                : d < radii.Penumbra.Radians + s ? MoonPhaseState.Penumbral : MoonPhaseState.Uneclipsed;
+                : d < radii.Penumbra.Radians + s ? MoonPhaseState.Penumbral : MoonPhaseState.Uneclipsed);
             var umbral = DiscCoverage.FractionInside(radii.Umbra.Radians, s, d);
             var penumbral = Math.Max(0, DiscCoverage.FractionInside(radii.Penumbra.Radians, s, d) - umbral);
             var limb = EclipsedMoonBrightness.SunlitLimb(g, radii, settings.Danjon);
@@ -56,28 +57,55 @@ public static class PhotoPlanner
             var topocentricKm = Frames.BodyDisc.MoonRadiusRatio * Frames.GeodeticLocation.EquatorialRadiusKm / Math.Sin(moon.SemiDiameter.Radians);
             var v = MoonBrightness.VisualMagnitude((sunKm - moonKm).Length, topocentricKm, phaseAngle);
             var luminance = MoonBrightness.Luminance(MoonBrightness.SurfaceBrightness(v, moon.SemiDiameter.Arcseconds)) * target * extinctionFactor;
-            var exposure = ExposureCalculator.For(luminance, camera, settings.BracketStops);
-
-            var warnings = new List<string>();
-            if (moon.ApparentAltitude.Degrees < LowAltitudeDegrees)
-                warnings.Add(moon.ApparentAltitude.Degrees < 0 ? "moon-below-horizon" : "low-altitude: the Moon is under 10°, dimmed and blurred by the air");
-            if (framing.TrailingLimitSeconds is { } limit && exposure.ShutterSeconds > limit)
-                warnings.Add(FormattableString.Invariant($"trailing: {exposure.ShutterSeconds:0.###} s exceeds the {limit:0.###} s blur limit on this mount; raise ISO or open up"));
             var sun = sky.SunAltitudeAt(h).Degrees;
-            if (sun > -12) warnings.Add(sun > -0.83 ? "daylight: the Sun is up — never aim near it" : "twilight-sky: the sky is still bright; expect low contrast");
+            var skyLuminance = SkyBrightness.Luminance(sun);
+            var exposure = ExposureCalculator.For(luminance, camera, settings.BracketStops, skyLuminance);
+
+            var warnings = new List<PhotoWarning>();
+            var altitude = moon.ApparentAltitude.Degrees;
+            if (altitude < 0) warnings.Add(new PhotoWarning(PhotoWarningCode.MoonBelowHorizon));
+            else if (altitude < LowAltitudeDegrees) warnings.Add(Warn(PhotoWarningCode.LowAltitude, ("altitudeDegrees", altitude)));
+            if (sun > -50.0 / 60) warnings.Add(Warn(PhotoWarningCode.Daylight, ("sunAltitudeDegrees", sun)));
+            else if (sun > -12) warnings.Add(Warn(PhotoWarningCode.TwilightSky, ("sunAltitudeDegrees", sun), ("skyLuminance", skyLuminance)));
+            warnings.AddRange(exposure.Warnings);
+            if (framing.TrailingLimitSeconds is { } limit && exposure.ShutterSeconds > limit)
+                warnings.Add(Trailing(exposure, limit, camera, framing));
             // On a fixed tripod the photographer re-aims when the Moon nears the frame's edge: warn at the first row
             // past that moment, and count again from there.
             if (camera.Mount == Mount.FixedTripod && tt > aimedAt && tt.SecondsSince(aimedAt) / 60 > framing.MinutesInFixedFrame)
             {
-                warnings.Add(FormattableString.Invariant($"leaving-frame: the Moon leaves a fixed frame about {framing.MinutesInFixedFrame:0} min after aiming; re-aim now"));
+                warnings.Add(Warn(PhotoWarningCode.LeavingFrame, ("minutesInFrame", framing.MinutesInFixedFrame)));
                 aimedAt = tt;
             }
-            if (exposure.IsoClamped) warnings.Add("iso-out-of-range: the shutter given needs an ISO outside 25–409600");
             var utc = toUtc(tt);
             return new TimelineRow(tt, utc, label, state, umbral, penumbral, moon.ApparentAltitude, moon.Azimuth, airMass,
                 Math.Log2(target * extinctionFactor), Math.Log2(limb), Math.Log2(disc), exposure, warnings);
         }
     }
+
+    private static PhotoWarning Warn(PhotoWarningCode code, params (string Name, double Value)[] numbers) =>
+        new(code, numbers.ToDictionary(n => n.Name, n => n.Value));
+
+    // Common practice (blur grows in proportion to exposure time and focal length): an exposure t over the blur limit
+    // L is log₂(t/L) stops too long; the ISO × t/L brings it to the limit, a lens of f·L/t keeps the blur in limit at
+    // the same exposure (the f-number, not the focal length, sets the Moon's image brightness), and ⌈t/L⌉ frames of L
+    // seconds stacked gather the same light; a star-tracking mount has the longer sidereal limit, a Moon-tracking none.
+    private static PhotoWarning Trailing(Exposure exposure, double limit, Camera camera, Framing framing) =>
+        Warn(PhotoWarningCode.Trailing,
+            ("shutterSeconds", exposure.ShutterSeconds), ("limitSeconds", limit), ("excessStops", Math.Log2(exposure.ShutterSeconds / limit)),
+            ("isoNeeded", exposure.Iso * exposure.ShutterSeconds / limit),
+            ("shorterFocalLengthMm", camera.EffectiveFocalLengthMm * limit / exposure.ShutterSeconds),
+            ("stackFrames", Math.Ceiling(exposure.ShutterSeconds / limit - 1e-9)),
+            ("siderealLimitSeconds", framing.SiderealLimitSeconds));
+
+    private static MoonPhaseState? StartingPhase(string? contact) => contact switch
+    {
+        "P1" or "U4" => MoonPhaseState.Penumbral,
+        "U1" or "U3" => MoonPhaseState.Partial,
+        "U2" => MoonPhaseState.Total,
+        "P4" => MoonPhaseState.Uneclipsed,
+        _ => null,
+    };
 
     // Rows at every visible contact (and greatest eclipse) and on whole multiples of the interval within the visible part.
     private static IEnumerable<(TtInstant Tt, string? Label)> RowInstants(LocalCircumstances local, double intervalMinutes)

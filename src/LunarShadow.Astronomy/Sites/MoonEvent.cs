@@ -6,10 +6,13 @@ namespace LunarShadow.Astronomy.Sites;
 /// <summary>What the Moon does at the horizon.</summary>
 public enum MoonEventType
 {
-    /// <summary>The upper limb rises above the sea horizon (refraction and dip included).</summary>
+    /// <summary>
+    /// The upper limb rises: by the almanac convention to 0° apparent altitude (refraction, no dip), or, for a site
+    /// that asks for a sea horizon, to the dip below 0°.
+    /// </summary>
     Rise,
 
-    /// <summary>The upper limb sets below the sea horizon.</summary>
+    /// <summary>The upper limb sets (the same convention).</summary>
     Set,
 
     /// <summary>The upper limb climbs above the local horizon profile.</summary>

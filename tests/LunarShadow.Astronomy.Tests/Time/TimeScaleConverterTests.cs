@@ -49,9 +49,11 @@ public class TimeScaleConverterTests
     [Fact]
     public void A_fixed_delta_t_defines_UTC_as_TT_minus_delta_t()
     {
+        // Meeus (1998), ch. 7: JD 2457116.5 is 2015 April 4, 0h; with ΔT fixed at 69 s (and no leap-second table in
+        // play for a fixed ΔT), UTC is 69 s earlier: 2015 April 3, 23:58:51 (hand calculation).
         var converter = new TimeScaleConverter(new FixedDeltaT(69));
-        var tt = TtInstant.FromJulianDate(2457116.5);
-        Assert.Equal(tt.JulianDate.Day - 69 / 86400.0, converter.ToUtc(tt).ToJulianDate(), 8);
+        var utc = converter.ToUtc(TtInstant.FromJulianDate(2457116.5));
+        Assert.InRange(Math.Abs((utc - Instant.FromUtc(2015, 4, 3, 23, 58, 51)).TotalMilliseconds), 0, 1);
     }
 
     [Fact]

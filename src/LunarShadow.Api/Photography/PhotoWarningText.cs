@@ -1,0 +1,54 @@
+using System.Globalization;
+using LunarShadow.Astronomy.Photography;
+
+namespace LunarShadow.Api.Photography;
+
+/// <summary>The one place where the photo plan's warning codes and numbers become English sentences.</summary>
+internal static class PhotoWarningText
+{
+    /// <summary>The code as written on the wire, e.g. sky-limits-exposure.</summary>
+    public static string Code(PhotoWarningCode code) => code switch
+    {
+        PhotoWarningCode.MoonBelowHorizon => "moon-below-horizon",
+        PhotoWarningCode.LowAltitude => "low-altitude",
+        PhotoWarningCode.Daylight => "daylight",
+        PhotoWarningCode.TwilightSky => "twilight-sky",
+        PhotoWarningCode.SkyLimitsExposure => "sky-limits-exposure",
+        PhotoWarningCode.Trailing => "trailing",
+        PhotoWarningCode.LeavingFrame => "leaving-frame",
+        PhotoWarningCode.ApertureClosed => "aperture-closed",
+        PhotoWarningCode.IsoChanged => "iso-changed",
+        PhotoWarningCode.BeyondFastestShutter => "beyond-fastest-shutter",
+        PhotoWarningCode.BeyondSlowestShutter => "beyond-slowest-shutter",
+        PhotoWarningCode.IsoOutOfRange => "iso-out-of-range",
+        _ => code.ToString(),
+    };
+
+    /// <summary>The warning in one English sentence.</summary>
+    public static string Sentence(PhotoWarning w)
+    {
+        double N(string name) => w[name] ?? 0;
+        return w.Code switch
+        {
+            PhotoWarningCode.MoonBelowHorizon => "The Moon is below the horizon.",
+            PhotoWarningCode.LowAltitude => F($"The Moon is {N("altitudeDegrees"):0.#}° up, under 10°: dimmed, reddened and blurred by the air."),
+            PhotoWarningCode.Daylight => F($"The Sun is up ({N("sunAltitudeDegrees"):0.#}°): never aim near it."),
+            PhotoWarningCode.TwilightSky => F($"Twilight: the Sun is {-N("sunAltitudeDegrees"):0.#}° below the horizon and the sky is about {N("skyLuminance"):0.###} cd/m²; expect low contrast."),
+            PhotoWarningCode.SkyLimitsExposure => F($"The bright sky would saturate at the {Shutter(N("wantedSeconds"))} the Moon needs: exposure held to {Shutter(N("cappedSeconds"))} (the Moon {N("stopsShort"):0.#} stops darker than ideal)."),
+            PhotoWarningCode.Trailing => F($"Trailing: {Shutter(N("shutterSeconds"))} is {N("excessStops"):0.#} stops over the {Shutter(N("limitSeconds"))} blur limit on this mount. Use a Moon-tracking mount (no limit) or a star-tracking one (limit {Shutter(N("siderealLimitSeconds"))}), or a lens of {N("shorterFocalLengthMm"):0} mm or shorter, or stack {N("stackFrames"):0} frames of {Shutter(N("limitSeconds"))}, or raise the ISO to {N("isoNeeded"):0}."),
+            PhotoWarningCode.LeavingFrame => F($"The Moon leaves a fixed frame about {N("minutesInFrame"):0} min after aiming: re-aim now."),
+            PhotoWarningCode.ApertureClosed => F($"Too bright for the fastest shutter: aperture closed from f/{N("fromAperture"):0.#} to f/{N("toAperture"):0.#}."),
+            PhotoWarningCode.IsoChanged => F($"ISO changed from {N("fromIso"):0} to {N("toIso"):0} to keep the shutter in the camera's range."),
+            PhotoWarningCode.BeyondFastestShutter => F($"Even at {Shutter(N("fastestSeconds"))} this over-exposes by {N("overStops"):0.#} stops: use a neutral-density filter or a smaller aperture."),
+            PhotoWarningCode.BeyondSlowestShutter => F($"Even at {Shutter(N("slowestSeconds"))} this under-exposes by {N("underStops"):0.#} stops: open the lens if it can, raise the ISO further, or stack frames."),
+            PhotoWarningCode.IsoOutOfRange => F($"The shutter given needs ISO {N("isoNeeded"):0}, outside 25–409600; ISO {N("iso"):0} is used."),
+            _ => Code(w.Code),
+        };
+    }
+
+    private static string Shutter(double seconds) => seconds >= 1 || seconds <= 0
+        ? F($"{seconds:0.#} s")
+        : F($"1/{Math.Round(1 / seconds):0} s");
+
+    private static string F(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
+}
