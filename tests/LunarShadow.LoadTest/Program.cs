@@ -41,7 +41,8 @@ HttpClient ClientFrom(string local, int connections) => new(new SocketsHttpHandl
         await socket.ConnectAsync(context.DnsEndPoint, token);
         return new NetworkStream(socket, ownsSocket: true);
     },
-}) { BaseAddress = baseUrl, Timeout = TimeSpan.FromSeconds(60) };
+})
+{ BaseAddress = baseUrl, Timeout = TimeSpan.FromSeconds(60) };
 
 string D(double v, int digits) => v.ToString("F" + digits.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
 

@@ -24,7 +24,8 @@ internal static class EphemerisEndpoints
     }
 
     public static readonly Parameter Utc = new("utc", ParameterType.Instant,
-        "The instant, ISO 8601 with Z or an offset, years −1999 to +3000 (e.g. 2025-03-14T06:58:00Z).") { Required = true };
+        "The instant, ISO 8601 with Z or an offset, years −1999 to +3000 (e.g. 2025-03-14T06:58:00Z).")
+    { Required = true };
 
     // The site is optional here: give lat and lon (with elevation and air) for topocentric places.
     private static readonly EndpointParameters Takes = new(

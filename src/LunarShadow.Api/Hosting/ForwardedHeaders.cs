@@ -1,5 +1,4 @@
 using System.Net;
-using Microsoft.AspNetCore.HttpOverrides;
 
 namespace LunarShadow.Api.Hosting;
 

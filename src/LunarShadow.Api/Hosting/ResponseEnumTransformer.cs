@@ -1,8 +1,8 @@
 using System.Text.Json.Nodes;
+using LunarShadow.Api.Common;
 using LunarShadow.Api.Eclipses;
 using LunarShadow.Api.Photography;
 using LunarShadow.Api.Sites;
-using LunarShadow.Api.Common;
 using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Photography;
 using LunarShadow.Astronomy.Sites;

@@ -1,6 +1,6 @@
 using System.Text.Json;
-using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Common;
+using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Photography;
 using NodaTime;

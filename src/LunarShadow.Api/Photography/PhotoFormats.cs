@@ -1,5 +1,5 @@
-using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Common;
+using LunarShadow.Api.Formatting;
 using LunarShadow.Astronomy.Photography;
 using NodaTime;
 

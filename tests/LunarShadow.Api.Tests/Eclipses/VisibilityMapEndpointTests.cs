@@ -1,6 +1,6 @@
+using System.Globalization;
 using System.Net;
 using System.Text.Json;
-using System.Globalization;
 using LunarShadow.Api.Tests.Support;
 using NetTopologySuite.Geometries;
 

@@ -2,9 +2,9 @@ using System.Globalization;
 using System.Net;
 using System.Text.Json;
 using CsvHelper;
-using Calendar = Ical.Net.Calendar;
 using LunarShadow.Api.Tests.Support;
 using NodaTime;
+using Calendar = Ical.Net.Calendar;
 
 namespace LunarShadow.Api.Tests.Exports;
 

@@ -3,7 +3,6 @@ using System.Text;
 using System.Text.Json;
 using System.Text.RegularExpressions;
 using CsvHelper;
-using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Tests.Support;
 using Calendar = Ical.Net.Calendar;
 

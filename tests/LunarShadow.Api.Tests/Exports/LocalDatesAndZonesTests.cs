@@ -1,6 +1,4 @@
 using System.Globalization;
-using System.Text.Json;
-using CsvHelper;
 using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Tests.Support;
 using NodaTime;

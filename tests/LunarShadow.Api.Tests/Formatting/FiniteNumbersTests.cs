@@ -1,7 +1,7 @@
-using Microsoft.Extensions.DependencyInjection;
 using System.Text.Json;
 using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Tests.Support;
+using Microsoft.Extensions.DependencyInjection;
 
 namespace LunarShadow.Api.Tests.Formatting;
 

@@ -1,7 +1,6 @@
 using System.Net;
 using System.Text;
 using LunarShadow.Api.Tests.Support;
-using Microsoft.AspNetCore.Hosting;
 using Xunit.Abstractions;
 
 namespace LunarShadow.Api.Tests.Sweep;

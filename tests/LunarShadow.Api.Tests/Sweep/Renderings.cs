@@ -1,13 +1,12 @@
 using System.Text;
 using System.Text.Json;
+using LunarShadow.Api.Common;
 using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Photography;
 using LunarShadow.Api.Sites;
-using LunarShadow.Api.Common;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Photography;
 using LunarShadow.Astronomy.Sites;
-using LunarShadow.Astronomy.Time;
 using Microsoft.AspNetCore.Http;
 using Microsoft.Extensions.DependencyInjection;
 

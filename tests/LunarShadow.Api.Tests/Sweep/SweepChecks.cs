@@ -1,11 +1,9 @@
 using System.Text.Json;
-using LunarShadow.Api.Photography;
-using LunarShadow.Api.Sites;
 using LunarShadow.Api.Common;
+using LunarShadow.Api.Photography;
 using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Photography;
 using LunarShadow.Astronomy.Sites;
-using LunarShadow.Astronomy.Units;
 using NodaTime;
 
 namespace LunarShadow.Api.Tests.Sweep;

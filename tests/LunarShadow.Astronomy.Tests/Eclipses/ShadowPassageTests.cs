@@ -1,7 +1,6 @@
 using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Frames;
 using LunarShadow.Astronomy.Time;
-using LunarShadow.Astronomy.Units;
 
 namespace LunarShadow.Astronomy.Tests.Eclipses;
 

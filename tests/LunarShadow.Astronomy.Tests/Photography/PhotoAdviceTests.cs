@@ -1,4 +1,3 @@
-using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Photography;
 using LunarShadow.Astronomy.Shadow;
 using LunarShadow.Astronomy.Sites;

@@ -1,4 +1,3 @@
-using LunarShadow.Astronomy.Eclipses;
 using LunarShadow.Astronomy.Sites;
 using LunarShadow.Astronomy.Tests.Eclipses;
 using LunarShadow.Astronomy.Time;
