@@ -17,6 +17,8 @@ public sealed class PageSession(IBrowserContext context, IPage page) : IAsyncDis
             AcceptDownloads = true,
             ViewportSize = new ViewportSize { Width = width, Height = height },
             DeviceScaleFactor = 1,
+            // The tests' own probes (WaitForFunction with a string) are evaluated in the page; the page's policy forbids eval.
+            BypassCSP = true,
         });
         var page = await context.NewPageAsync();
         var session = new PageSession(context, page);

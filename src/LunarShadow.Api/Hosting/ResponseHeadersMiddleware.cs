@@ -11,12 +11,12 @@ internal sealed class ResponseHeadersMiddleware(RequestDelegate next)
 {
     /// <summary>The page's policy: its own scripts, styles and data only; never inside a frame.</summary>
     public const string PagePolicy =
-        "default-src 'self'; script-src 'self'; style-src 'self'; img-src 'self' data:; connect-src 'self'; font-src 'self'; " +
+        "default-src 'self'; script-src 'self'; style-src 'self' 'unsafe-inline'; img-src 'self' data:; connect-src 'self'; font-src 'self'; " +
         "object-src 'none'; base-uri 'none'; form-action 'self'; frame-ancestors 'none'";
 
     /// <summary>The embed card's policy: the same, except that any site may frame it.</summary>
     public const string EmbedPolicy =
-        "default-src 'self'; script-src 'self'; style-src 'self'; img-src 'self' data:; connect-src 'self'; font-src 'self'; " +
+        "default-src 'self'; script-src 'self'; style-src 'self' 'unsafe-inline'; img-src 'self' data:; connect-src 'self'; font-src 'self'; " +
         "object-src 'none'; base-uri 'none'; form-action 'self'; frame-ancestors *";
 
     public Task InvokeAsync(HttpContext context)

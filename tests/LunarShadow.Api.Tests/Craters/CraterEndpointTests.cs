@@ -9,7 +9,7 @@ namespace LunarShadow.Api.Tests.Craters;
 // One collection with the ephemeris tests: their hosts then start one after the other (two hosts starting at once can
 // trip the shared bootstrap logger, a known issue of the host set-up).
 [Collection("Ephemeris and craters")]
-public class CraterEndpointTests(ApiFactory factory, ITestOutputHelper output) : IClassFixture<ApiFactory>
+public class CraterEndpointTests(UnthrottledApiFactory factory, ITestOutputHelper output) : IClassFixture<UnthrottledApiFactory>
 {
     private readonly HttpClient _client = factory.CreateClient();
 

@@ -6,7 +6,7 @@ using NetTopologySuite.Geometries;
 
 namespace LunarShadow.Api.Tests.Eclipses;
 
-public class VisibilityMapEndpointTests(ApiFactory factory) : IClassFixture<ApiFactory>
+public class VisibilityMapEndpointTests(UnthrottledApiFactory factory) : IClassFixture<UnthrottledApiFactory>
 {
     private static readonly GeometryFactory Geometry = new();
     private readonly HttpClient _client = factory.CreateClient();

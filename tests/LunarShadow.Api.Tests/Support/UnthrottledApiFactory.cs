@@ -10,6 +10,11 @@ public sealed class UnthrottledApiFactory : WebApplicationFactory<Program>
     {
         builder.UseSetting("RateLimiting:PermitsPerSecond", "1000000");
         builder.UseSetting("RateLimiting:Burst", "1000000");
+        builder.UseSetting("RateLimiting:ExpensivePerClient", "64");
+        builder.UseSetting("RateLimiting:ExpensiveQueuePerClient", "100000");
+        builder.UseSetting("RateLimiting:ExpensiveTotal", "64");
+        builder.UseSetting("RateLimiting:ExpensiveQueueTotal", "100000");
+        builder.UseSetting("RequestTimeoutSeconds", "300");
     }
 }
 

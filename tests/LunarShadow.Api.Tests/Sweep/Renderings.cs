@@ -20,6 +20,7 @@ internal static class Renderings
 {
     private static readonly IServiceProvider Services = new ServiceCollection()
         .AddLogging()
+        .AddSingleton(LunarShadow.Astronomy.Eclipses.EclipseFinders.Shared)
         .ConfigureHttpJsonOptions(o => FiniteNumbers.Configure(o.SerializerOptions))
         .BuildServiceProvider();
 
