@@ -35,7 +35,7 @@ internal static class PhotoWarningText
             PhotoWarningCode.Daylight => F($"The Sun is up ({N("sunAltitudeDegrees"):0.#}°): never aim near it."),
             PhotoWarningCode.TwilightSky => F($"Twilight: the Sun is {-N("sunAltitudeDegrees"):0.#}° below the horizon and the sky is about {N("skyLuminance"):0.###} cd/m²; expect low contrast."),
             PhotoWarningCode.SkyLimitsExposure => F($"The bright sky would saturate at the {Shutter(N("wantedSeconds"))} the Moon needs: exposure held to {Shutter(N("cappedSeconds"))} (the Moon {N("stopsShort"):0.#} stops darker than ideal)."),
-            PhotoWarningCode.Trailing => F($"Trailing: {Shutter(N("shutterSeconds"))} is {N("excessStops"):0.#} stops over the {Shutter(N("limitSeconds"))} blur limit on this mount. Use a Moon-tracking mount (no limit) or a star-tracking one (limit {Shutter(N("siderealLimitSeconds"))}), or a lens of {N("shorterFocalLengthMm"):0} mm or shorter, or stack {N("stackFrames"):0} frames of {Shutter(N("limitSeconds"))}, or raise the ISO to {N("isoNeeded"):0}."),
+            PhotoWarningCode.Trailing => F($"Trailing: {Shutter(N("shutterSeconds"))} is {N("excessStops"):0.#} stops over the {Shutter(N("limitSeconds"))} blur limit on this mount. Use a Moon-tracking mount (no limit) or a star-tracking one (limit {Shutter(N("siderealLimitSeconds"))}){TrailingAlternatives(N("shorterFocalLengthMm"), N("isoNeeded"))}, or stack {N("stackFrames"):0} frames of {Shutter(N("limitSeconds"))}."),
             PhotoWarningCode.LeavingFrame => F($"The Moon leaves a fixed frame about {N("minutesInFrame"):0} min after aiming: re-aim now."),
             PhotoWarningCode.ApertureClosed => F($"Too bright for the fastest shutter: aperture closed from f/{N("fromAperture"):0.#} to f/{N("toAperture"):0.#}."),
             PhotoWarningCode.IsoChanged => F($"ISO changed from {N("fromIso"):0} to {N("toIso"):0} to keep the shutter in the camera's range."),
@@ -51,4 +51,12 @@ internal static class PhotoWarningText
         : F($"1/{Math.Round(1 / seconds):0} s");
 
     private static string F(FormattableString text) => text.ToString(CultureInfo.InvariantCulture);
+
+    // Remedies a photographer can act on: a lens no shorter than 10 mm and an ISO no higher than 25,600 (common practice).
+    private static string TrailingAlternatives(double shorterFocalLengthMm, double isoNeeded)
+    {
+        var lens = shorterFocalLengthMm >= 10 ? F($", or a lens of {shorterFocalLengthMm:0} mm or shorter") : "";
+        var iso = isoNeeded is > 0 and <= 25_600 ? F($", or raise the ISO to {isoNeeded:0}") : "";
+        return lens + iso;
+    }
 }
