@@ -46,6 +46,8 @@ internal static class ServiceRegistration
         builder.Services.AddOpenApi("v1", options => options.AddSchemaTransformer<TimeSchemaTransformer>()
             .AddSchemaTransformer<ResponseEnumTransformer>()
             .AddOperationTransformer<ParameterTableTransformer>()
+            .AddOperationTransformer<ObservationBodyTransformer>()
+            .AddDocumentTransformer<BearerSecurityTransformer>()
             .AddDocumentTransformer<HealthDocumentTransformer>()
             .AddDocumentTransformer((document, _, _) =>
         {

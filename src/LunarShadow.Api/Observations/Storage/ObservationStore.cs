@@ -17,7 +17,7 @@ internal sealed record StoreOutcome(IReadOnlyList<long>? Ids, int? DuplicateInde
 /// </summary>
 internal sealed class ObservationStore(StorageDialect dialect) : IObservationReader
 {
-    private const string Columns = "id, eclipse_date, kind, feature, crossing, danjon_value, observed_unix_ms, latitude_degrees, longitude_degrees, elevation_metres, uncertainty_seconds, optics, observer, received_unix_ms, k.name";
+    private const string Columns = "o.id, o.eclipse_date, o.kind, o.feature, o.crossing, o.danjon_value, o.observed_unix_ms, o.latitude_degrees, o.longitude_degrees, o.elevation_metres, o.uncertainty_seconds, o.optics, o.observer, o.received_unix_ms, k.name";
 
     /// <summary>Stores every draft, or none when one is an exact duplicate from the same key.</summary>
     public async Task<StoreOutcome> AddAsync(ObservatoryKey key, CalendarDate eclipse, IReadOnlyList<ObservationDraft> drafts, DateTimeOffset received, CancellationToken cancellationToken)
