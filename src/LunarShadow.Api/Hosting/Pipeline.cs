@@ -1,7 +1,7 @@
 using LunarShadow.Api.Craters;
 using LunarShadow.Api.Eclipses;
-using LunarShadow.Api.Observations;
 using LunarShadow.Api.Ephemeris;
+using LunarShadow.Api.Observations;
 using LunarShadow.Api.Photography;
 using LunarShadow.Api.Sites;
 using Serilog;
