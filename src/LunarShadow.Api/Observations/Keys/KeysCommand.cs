@@ -57,6 +57,12 @@ internal static class KeysCommand
                 _ => await Fail(error, Usage),
             };
         }
+        catch (System.Data.Common.DbException e)
+        {
+            // An unreachable or misconfigured database: say so in one line, not a stack trace.
+            await error.WriteLineAsync($"The {dialect.Name} database could not be used: {e.Message}");
+            return 1;
+        }
         finally
         {
             (dialect as IDisposable)?.Dispose();
