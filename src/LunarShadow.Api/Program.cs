@@ -4,6 +4,10 @@ using LunarShadow.Api.Hosting;
 if (args is ["--health-probe", var probe])
     return await HealthProbe.RunAsync(new Uri(probe));
 
+// `keys add "Name" | list | revoke <name-or-id>`: manage the observatory keys on the configured database.
+if (args is [LunarShadow.Api.Observations.Keys.KeysCommand.Verb, .. var keyArgs])
+    return await LunarShadow.Api.Observations.Keys.KeysCommand.RunAsync(keyArgs, LunarShadow.Api.Observations.Keys.KeysCommand.HostConfiguration(), Console.Out, Console.Error);
+
 var builder = WebApplication.CreateBuilder(args);
 builder.AddLunarShadowServices();
 

@@ -29,6 +29,12 @@ internal sealed class RateLimitOptions
 
     /// <summary>Expensive requests over all clients that may wait for their turn (default 16); more get 429.</summary>
     public int ExpensiveQueueTotal { get; set; } = 16;
+
+    /// <summary>Observation writes one key (or, without a key, one client) may make per minute, sustained (default 60).</summary>
+    public int WritesPerMinute { get; set; } = 60;
+
+    /// <summary>Observation writes one key or client may make in a burst (default 30).</summary>
+    public int WriteBurst { get; set; } = 30;
 }
 
 /// <summary>
@@ -43,10 +49,28 @@ internal static class RateLimiting
     public static bool IsExpensive(HttpRequest request)
     {
         var path = request.Path;
+        if (IsObservationWrite(request)) return false; // cheap, and limited by their own bucket
         if (path.StartsWithSegments("/api/v1/sites/upcoming")) return true;
         if (path.Equals("/api/v1/eclipses", StringComparison.OrdinalIgnoreCase) || path.Equals("/api/v1/eclipses/", StringComparison.OrdinalIgnoreCase)) return true;
         if (path.StartsWithSegments("/api/v1/eclipses") && path.Value!.EndsWith("/visibility-map", StringComparison.OrdinalIgnoreCase)) return true;
         return HttpMethods.IsPost(request.Method) && path.StartsWithSegments("/api");
+    }
+
+    /// <summary>True for a POST of observations, which has its own limit per key.</summary>
+    public static bool IsObservationWrite(HttpRequest request) =>
+        HttpMethods.IsPost(request.Method) && request.Path.StartsWithSegments("/api/v1/eclipses")
+        && request.Path.Value!.TrimEnd('/').EndsWith("/observations", StringComparison.OrdinalIgnoreCase);
+
+    /// <summary>
+    /// What a write is counted against: its bearer key (by a hash, so the key never sits in memory as a partition
+    /// name), or the client's address when it sends none.
+    /// </summary>
+    public static string WriterKey(HttpContext context)
+    {
+        var authorization = context.Request.Headers.Authorization.ToString();
+        return authorization.Length > 0
+            ? "key:" + Convert.ToHexString(System.Security.Cryptography.SHA256.HashData(System.Text.Encoding.UTF8.GetBytes(authorization)))[..32]
+            : "client:" + ClientKey(context);
     }
 
     /// <summary>The client a request is counted against: its (possibly forwarded) address.</summary>
@@ -89,7 +113,18 @@ internal static class RateLimiting
                         QueueProcessingOrder = QueueProcessingOrder.OldestFirst,
                     })
                     : RateLimitPartition.GetNoLimiter("unlimited"));
-            limiter.GlobalLimiter = PartitionedRateLimiter.CreateChained(perClient, expensivePerClient, expensiveTotal);
+            var writes = PartitionedRateLimiter.Create<HttpContext, string>(context =>
+                IsObservationWrite(context.Request)
+                    ? RateLimitPartition.GetTokenBucketLimiter(WriterKey(context), _ => new TokenBucketRateLimiterOptions
+                    {
+                        TokenLimit = Math.Max(1, options.WriteBurst),
+                        TokensPerPeriod = Math.Max(1, options.WritesPerMinute),
+                        ReplenishmentPeriod = TimeSpan.FromMinutes(1),
+                        QueueLimit = 0,
+                        AutoReplenishment = true,
+                    })
+                    : RateLimitPartition.GetNoLimiter("unlimited"));
+            limiter.GlobalLimiter = PartitionedRateLimiter.CreateChained(perClient, expensivePerClient, expensiveTotal, writes);
             limiter.OnRejected = async (context, token) =>
             {
                 var response = context.HttpContext.Response;
@@ -98,7 +133,7 @@ internal static class RateLimiting
                 response.Headers.RetryAfter = retryAfter.ToString(CultureInfo.InvariantCulture);
                 response.Headers.CacheControl = "no-store";
                 await Results.Problem(
-                    detail: $"Too many requests from this client: at most {options.PermitsPerSecond} per second (bursts of {options.Burst}), and at most {options.ExpensivePerClient} search, catalogue range, map or batch at a time ({options.ExpensiveQueuePerClient} waiting). Retry after {retryAfter} s.",
+                    detail: $"Too many requests from this client: at most {options.PermitsPerSecond} per second (bursts of {options.Burst}), and at most {options.ExpensivePerClient} search, catalogue range, map or batch at a time ({options.ExpensiveQueuePerClient} waiting), and at most {options.WritesPerMinute} observation writes a minute per key (bursts of {options.WriteBurst}). Retry after {retryAfter} s.",
                     statusCode: StatusCodes.Status429TooManyRequests, title: "Too many requests.",
                     type: "https://lunarshadow.invalid/problems/too-many-requests").ExecuteAsync(context.HttpContext);
             };

@@ -17,6 +17,7 @@ internal static class ServiceRegistration
         builder.Services.AddSingleton<NodaTime.IClock>(NodaTime.SystemClock.Instance);
         builder.Services.AddLunarShadowForwardedHeaders(builder.Configuration);
         builder.Services.AddSingleton<LunarShadow.Astronomy.Eclipses.EclipseFinders>(); // the eclipse caches, one set per host
+        builder.Services.AddObservationStorage(builder.Configuration);
         builder.Services.AddLunarShadowRateLimiting(builder.Configuration);
         builder.Services.AddPublicReadCors();
         builder.Services.AddHealthChecks().AddCheck<ReadinessCheck>("ephemeris", tags: ["ready"]);
@@ -45,6 +46,8 @@ internal static class ServiceRegistration
         builder.Services.AddOpenApi("v1", options => options.AddSchemaTransformer<TimeSchemaTransformer>()
             .AddSchemaTransformer<ResponseEnumTransformer>()
             .AddOperationTransformer<ParameterTableTransformer>()
+            .AddOperationTransformer<ObservationBodyTransformer>()
+            .AddDocumentTransformer<BearerSecurityTransformer>()
             .AddDocumentTransformer<HealthDocumentTransformer>()
             .AddDocumentTransformer((document, _, _) =>
         {

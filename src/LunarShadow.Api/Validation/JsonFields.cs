@@ -61,9 +61,10 @@ internal static class JsonFields
 
     /// <summary>
     /// An object's members as invariant text: numbers, strings and booleans as written; a horizon may also be an array of
-    /// [azimuth, altitude] pairs. Anything else is a problem named with the prefix ("sites[3].").
+    /// [azimuth, altitude] pairs. Anything else is a problem named with the prefix ("sites[3]."), except the members named
+    /// in <paramref name="nested"/>, which the caller reads by their own rule (an observation's "site" object).
     /// </summary>
-    public static Dictionary<string, string?> Of(JsonElement element, QueryReader reader, string prefix = "")
+    public static Dictionary<string, string?> Of(JsonElement element, QueryReader reader, string prefix = "", IReadOnlyCollection<string>? nested = null)
     {
         var fields = new Dictionary<string, string?>(StringComparer.Ordinal);
         foreach (var property in element.EnumerateObject())
@@ -79,6 +80,8 @@ internal static class JsonFields
                     break;
                 case JsonValueKind.Array or JsonValueKind.Object when prefix.Length == 0 && property.Name == "sites":
                     break; // the batch's list of sites, read by its own rule
+                case JsonValueKind.Array or JsonValueKind.Object when nested?.Contains(property.Name) == true:
+                    break;
                 default:
                     reader.Fail(prefix + property.Name, $"{prefix}{property.Name} must be a number or a string; got a JSON {value.ValueKind.ToString().ToLowerInvariant()}.");
                     break;

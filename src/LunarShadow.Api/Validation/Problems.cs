@@ -17,6 +17,15 @@ internal static class Problems
         detail: "This resource is available as " + string.Join(", ", offered.Select(Formatting.ContentNegotiation.MediaType)) + "; ask with Accept or ?format=.",
         statusCode: StatusCodes.Status406NotAcceptable, title: "No acceptable representation.", type: "https://lunarshadow.invalid/problems/not-acceptable");
 
+    /// <summary>401 for a write without a valid key (the caller adds the WWW-Authenticate challenge).</summary>
+    public static ProblemHttpResult Unauthorized(string detail) => TypedResults.Problem(
+        detail: detail, statusCode: StatusCodes.Status401Unauthorized, title: "A valid observatory key is required.", type: "https://lunarshadow.invalid/problems/unauthorized");
+
+    /// <summary>409 for a write that repeats one already stored, naming the item in the request.</summary>
+    public static ProblemHttpResult Conflict(string detail, string field) => TypedResults.Problem(
+        detail: detail, statusCode: StatusCodes.Status409Conflict, title: "Already stored.", type: "https://lunarshadow.invalid/problems/duplicate",
+        extensions: new Dictionary<string, object?> { ["field"] = field });
+
     /// <summary>413 for a body or batch over the limit.</summary>
     public static ProblemHttpResult TooLarge(string detail) => TypedResults.Problem(
         detail: detail, statusCode: StatusCodes.Status413PayloadTooLarge, title: "Request too large.", type: "https://lunarshadow.invalid/problems/too-large");

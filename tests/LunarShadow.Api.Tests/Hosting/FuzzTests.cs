@@ -1,5 +1,6 @@
 using System.Net;
 using System.Text;
+using LunarShadow.Api.Tests.Support;
 using Microsoft.AspNetCore.Mvc.Testing;
 
 namespace LunarShadow.Api.Tests.Hosting;
@@ -38,6 +39,7 @@ public class FuzzTests
         ("/api/v1/sites/upcoming", ["lat", "lon", "tz", "from", "count", "phase", "night", "open", "minAltitude", "pressure", "temperature", "horizon", "format"]),
         ("/api/v1/eclipses/{date}/photo-plan", ["lat", "lon", "tz", "iso", "aperture", "shutter", "focalLength", "teleconverter", "sensor", "pixelPitch", "pixels", "mount", "danjon", "danjonL", "pressure", "temperature", "interval", "bracket", "blur", "extinction", "gap", "timelapseInterval", "fileSize", "start", "format"]),
         ("/api/v1/eclipses/{date}/visibility-map", ["shadow", "deltaT", "format"]),
+        ("/api/v1/eclipses/{date}/observations", ["kind", "format"]),
     ];
 
     // Several eclipses (total 2025-09-07, partial 2026-03-03 is total, 2029-12-20 total; NASA five-millennium canon, from
@@ -54,8 +56,13 @@ public class FuzzTests
     [Fact]
     public async Task No_input_makes_the_service_fail()
     {
+        await using var storage = await StorageBackend.CreateAsync("sqlite");
+        var key = await ObservationHost.AddKeyAsync(storage, "Invented Fuzz Observatory");
         await using var factory = new WebApplicationFactory<Program>().WithWebHostBuilder(b =>
         {
+            foreach (var (name, value) in storage.Settings) b.UseSetting(name, value);
+            b.UseSetting("RateLimiting:WritesPerMinute", "1000000");
+            b.UseSetting("RateLimiting:WriteBurst", "1000000");
             b.UseSetting("RateLimiting:PermitsPerSecond", "1000000");
             b.UseSetting("RateLimiting:Burst", "1000000");
             b.UseSetting("RateLimiting:ExpensiveQueuePerClient", "1000");
@@ -96,26 +103,35 @@ public class FuzzTests
             "{\"lat\":{\"a\":{\"b\":{\"c\":{\"d\":{\"e\":{\"f\":{\"g\":{\"h\":1}}}}}}}}}", "{\"lat\":1,\"lon\":1,\"iso\":true}",
             "{\"lat\":1,\"lon\":1,\"sensor\":\"1x1\",\"focalLength\":10000,\"pixelPitch\":0.5}", new string('[', 5000),
         ];
-        var bodyBytes = bodies.Select(Encoding.UTF8.GetBytes).Concat(MalformedText()).ToList();
+        var writes = new HashSet<HttpStatusCode>();
+        var bodyBytes = bodies.Concat(ObservationBodies(random)).Select(Encoding.UTF8.GetBytes).Concat(MalformedText()).ToList();
         foreach (var body in bodyBytes)
         {
             foreach (var date in new[] { "2025-09-07", "2026-03-03", "2029-12-20" })
             {
-                foreach (var (path, type) in new[] { ($"/api/v1/eclipses/{date}/local", "application/json"), ($"/api/v1/eclipses/{date}/photo-plan", "application/json"), ($"/api/v1/eclipses/{date}/local", "text/xml") })
+                foreach (var (path, type, bearer) in new (string Path, string Type, string? Bearer)[]
                 {
-                    var content = new ByteArrayContent(body);
-                    content.Headers.ContentType = new System.Net.Http.Headers.MediaTypeHeaderValue(type);
+                    ($"/api/v1/eclipses/{date}/local", "application/json", null), ($"/api/v1/eclipses/{date}/photo-plan", "application/json", null),
+                    ($"/api/v1/eclipses/{date}/local", "text/xml", null), ($"/api/v1/eclipses/{date}/observations", "application/json", key),
+                    ($"/api/v1/eclipses/{date}/observations", "text/xml", key), ($"/api/v1/eclipses/{date}/observations", "application/json", "lsk_" + new string('A', 43)),
+                    ($"/api/v1/eclipses/{date}/observations", "application/json", null),
+                })
+                {
+                    using var request = new HttpRequestMessage(HttpMethod.Post, path) { Content = new ByteArrayContent(body) };
+                    request.Content.Headers.ContentType = new System.Net.Http.Headers.MediaTypeHeaderValue(type);
+                    if (bearer is not null) request.Headers.Authorization = new System.Net.Http.Headers.AuthenticationHeaderValue("Bearer", bearer);
                     sent++;
                     HttpResponseMessage response;
                     try
                     {
-                        response = await client.PostAsync(path, content);
+                        response = await client.SendAsync(request);
                     }
                     catch (HttpRequestException e)
                     {
                         failures.Add($"broken answer for POST {path}: {Encoding.UTF8.GetString(body[..Math.Min(100, body.Length)])}: {e.InnerException?.InnerException?.Message ?? e.Message}");
                         continue;
                     }
+                    if (path.EndsWith("/observations", StringComparison.Ordinal)) writes.Add(response.StatusCode);
                     await Check(response, $"POST {path} ({type}) {Encoding.UTF8.GetString(body[..Math.Min(60, body.Length)])}", failures);
                 }
             }
@@ -126,6 +142,47 @@ public class FuzzTests
         Assert.Contains(HttpStatusCode.OK, seen);
         Assert.Contains(HttpStatusCode.BadRequest, seen);
         Assert.Contains(HttpStatusCode.NotFound, seen);
+        // The observation writes reached storage (stored, then repeated) as well as every refusal.
+        Assert.Contains(HttpStatusCode.Created, writes);
+        Assert.Contains(HttpStatusCode.Conflict, writes);
+        Assert.Contains(HttpStatusCode.Unauthorized, writes);
+        Assert.Contains(HttpStatusCode.BadRequest, writes);
+    }
+
+    // Observation bodies: valid ones (so some are stored, then repeat as 409), each field replaced by a nasty value or a
+    // wrong JSON type, batches with bad members, and extreme sizes.
+    private static IEnumerable<string> ObservationBodies(Random random)
+    {
+        const string Site = "{\"lat\":13,\"lon\":77.6,\"elevation\":900}";
+        string[] valid =
+        [
+            "{\"kind\":\"crater-timing\",\"feature\":\"Tycho\",\"crossing\":\"immersion\",\"utc\":\"2025-09-07T17:09:20Z\",\"site\":" + Site + ",\"uncertaintySeconds\":3,\"optics\":\"80 mm\",\"observer\":\"R. Fenwick\"}",
+            "{\"kind\":\"danjon\",\"value\":2.5,\"utc\":\"2025-09-07T18:10:00Z\",\"site\":" + Site + "}",
+        ];
+        foreach (var v in valid)
+        {
+            yield return v;
+            yield return "[" + v + "," + v + "]";
+        }
+        string[] fields = ["kind", "feature", "crossing", "utc", "uncertaintySeconds", "optics", "observer", "value", "lat", "lon", "elevation", "site"];
+        for (var i = 0; i < 120; i++)
+        {
+            var template = valid[random.Next(valid.Length)];
+            var field = fields[random.Next(fields.Length)];
+            var nasty = random.Next(4) switch
+            {
+                0 => "null",
+                1 => "{\"x\":[1,2]}",
+                2 => "[\"a\"]",
+                _ => System.Text.Json.JsonSerializer.Serialize(Nasty[random.Next(Nasty.Length)]),
+            };
+            var replaced = System.Text.RegularExpressions.Regex.Replace(template, $"\"{field}\":(\\{{[^}}]*\\}}|\"[^\"]*\"|[^,}}]+)", $"\"{field}\":{nasty}");
+            yield return random.Next(3) == 0 ? "[" + valid[0] + "," + replaced + "]" : replaced;
+        }
+        yield return "[" + string.Join(',', Enumerable.Repeat(valid[1], 501)) + "]";
+        yield return "[[[[[[[[[[[[" + valid[1] + "]]]]]]]]]]]]";
+        yield return "{\"kind\":\"danjon\",\"value\":2,\"utc\":\"2025-09-07T18:10:00Z\",\"site\":{\"lat\":13,\"lon\":77.6,\"elevation\":900,\"site\":{}}}";
+        yield return "{\"kind\":\"danjon\",\"value\":2,\"utc\":\"0001-01-01T00:00:00Z\",\"site\":" + Site + "}";
     }
 
     // JSON text that is not UTF-8 (RFC 8259 §8.1) or holds an escaped lone surrogate (RFC 8259 §8.2), in each kind of field.
