@@ -1,6 +1,7 @@
 using LunarShadow.Api.Craters;
 using LunarShadow.Api.Eclipses;
 using LunarShadow.Api.Ephemeris;
+using LunarShadow.Api.Observations;
 using LunarShadow.Api.Photography;
 using LunarShadow.Api.Sites;
 using Serilog;
@@ -59,6 +60,7 @@ internal static class Pipeline
         app.MapUpcomingEndpoints();
         app.MapPhotoEndpoints();
         app.MapCraterEndpoints();
+        app.MapEnlargementEndpoints();
         return app;
     }
 }

@@ -17,6 +17,10 @@ internal static class Problems
         detail: "This resource is available as " + string.Join(", ", offered.Select(Formatting.ContentNegotiation.MediaType)) + "; ask with Accept or ?format=.",
         statusCode: StatusCodes.Status406NotAcceptable, title: "No acceptable representation.", type: "https://lunarshadow.invalid/problems/not-acceptable");
 
+    /// <summary>409 for a request the service cannot answer yet in its present state (e.g. too few observations).</summary>
+    public static ProblemHttpResult Conflict(string detail) => TypedResults.Problem(
+        detail: detail, statusCode: StatusCodes.Status409Conflict, title: "Not possible yet.", type: "https://lunarshadow.invalid/problems/not-yet");
+
     /// <summary>413 for a body or batch over the limit.</summary>
     public static ProblemHttpResult TooLarge(string detail) => TypedResults.Problem(
         detail: detail, statusCode: StatusCodes.Status413PayloadTooLarge, title: "Request too large.", type: "https://lunarshadow.invalid/problems/too-large");
