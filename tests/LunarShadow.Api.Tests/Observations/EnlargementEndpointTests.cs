@@ -121,7 +121,10 @@ public class EnlargementEndpointTests(ObservationsApiFactory factory, ITestOutpu
         Assert.Equal(12, photo.GetProperty("measuredShadow").GetProperty("timings").GetInt32());
         Assert.Equal("enlarged", photo.GetProperty("eclipse").GetProperty("shadowModel").GetString());
 
-        // A new timing (a minute late) shows at once: the answers are not served from the output cache.
+        // A new timing (a minute late) shows at once: the answers are not served from the output cache, and other caches
+        // must revalidate them (RFC 9111 §5.2.2.4 no-cache).
+        var headers = await _client.GetAsync($"/api/v1/eclipses/{Date}/craters?shadow=measured");
+        Assert.Contains("no-cache", headers.Headers.CacheControl!.ToString(), StringComparison.Ordinal);
         Store(1, shiftSeconds: 60, skip: 20);
         var again = await Get("craters?shadow=measured");
         Assert.Equal(13, again.GetProperty("measuredShadow").GetProperty("timings").GetInt32());
