@@ -2,6 +2,8 @@ using LunarShadow.Api.Common;
 using LunarShadow.Api.Formatting;
 using LunarShadow.Api.Validation;
 using LunarShadow.Astronomy.Eclipses;
+using LunarShadow.Astronomy.Shadow;
+using LunarShadow.Astronomy.Time;
 
 namespace LunarShadow.Api.Observations;
 
@@ -30,7 +32,9 @@ internal static class EnlargementEndpoints
     internal static async Task<IResult> Get(HttpRequest request)
     {
         var f = RequestFields.FromQuery(request, new QueryReader());
-        var query = EclipseLookup.Read(request, f, Formats);
+        // The fit is relative to the geometric umbra whatever model found the eclipse: only the date and ΔT are read.
+        var query = new EclipseRequest(f.Date(Parameters.EclipseDate), ShadowModel.Danjon, new TimeScaleConverter(ModelChoice.DeltaT(f)),
+            Formats.Choose(request, f), request.FinderFor(ShadowModel.Danjon));
         if (EclipseLookup.Resolve(f, query, Formats, out var eclipse) is { } problem) return problem;
 
         var services = request.HttpContext.RequestServices;

@@ -91,8 +91,8 @@ public class UmbralEnlargementFitTests(ITestOutputHelper output)
         Assert.True(Math.Abs(fit.EnlargementPercent - implied) < 2 * fit.EnlargementPercentSigma);
 
         // Published determinations of the enlargement from crater and contact timings, as percent of the umbra's radius:
-        // Mayer 1/60 and Lambert 1/40 (quoted by Chauvenet 1891, via Espenak, "Enlargement of Earth's Shadows",
-        // eclipsewise.com), Beer & Mädler 1/50 (same), Soulsby's per-eclipse means (about 2.0 % at 1945 Dec 19, 2.36 ±
+        // Mayer 1/60 and Lambert 1/40 (quoted by Chauvenet 1891, via F. Espenak's web page "Enlargement of Earth's Shadows"),
+        // Beer & Mädler 1/50 (same), Soulsby's per-eclipse means (about 2.0 % at 1945 Dec 19, 2.36 ±
         // 0.29 % at 1968 Apr 13; his published crater-timing reductions), Sky & Telescope (Jan 2019, p. 21: "about 2 %"
         // on average). The lower end, about 1.1 % for Herald & Sinnott (2014), is from memory and not verified here; we
         // take 1.0 % to 2.5 % as the published range.
