@@ -35,7 +35,7 @@ public sealed class EclipseFinders
         lock (_gate)
         {
             if (_finders.TryGetValue(model, out var known)) return known;
-            if (Chosen(model) && _finders.Keys.Count(Chosen) >= MaxLayerFinders)
+            if (Chosen(model) && _finders.Keys.Count(k => k.Kind is ShadowModelKind.Layer or ShadowModelKind.Enlarged) >= MaxLayerFinders)
             {
                 // Keep the default height; drop the caller-chosen ones (callers holding one keep using it).
                 foreach (var stale in _finders.Keys.Where(Chosen).ToList())
