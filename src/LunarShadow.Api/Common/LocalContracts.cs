@@ -16,6 +16,7 @@ namespace LunarShadow.Api.Common;
 /// <param name="PublicNight">The plan within the opening hours, when <c>open</c> was given.</param>
 /// <param name="Cautions">Safety notes that apply to this night.</param>
 /// <param name="Track">The Moon's and Sun's altitude through the night, when <c>track</c> was asked for.</param>
+/// <param name="MeasuredShadow">With shadow=measured: the crater timings used and the fitted enlargement.</param>
 public sealed record LocalResponse(
     SiteEcho Site,
     EclipseBrief Eclipse,
@@ -31,7 +32,8 @@ public sealed record LocalResponse(
     string Summary,
     PublicNightResponse? PublicNight,
     IReadOnlyList<string> Cautions,
-    IReadOnlyList<TrackPointResponse>? Track = null)
+    IReadOnlyList<TrackPointResponse>? Track = null,
+    MeasuredShadowEcho? MeasuredShadow = null)
 {
     /// <summary>Deprecated: the former name of <see cref="GreatestVisibleUmbralMagnitude"/>, written for one more release.</summary>
     public VisibleMagnitudeResponse? MaxVisibleUmbralMagnitude => GreatestVisibleUmbralMagnitude;

@@ -13,6 +13,7 @@ namespace LunarShadow.Api.Craters;
 /// <param name="ReachedCount">How many of the listed features the umbra reaches.</param>
 /// <param name="Features">The features, in the order the umbra reaches them; those it never reaches come last.</param>
 /// <param name="DataVersion">Version tag of the embedded ephemeris data.</param>
+/// <param name="MeasuredShadow">With shadow=measured: the timings used and the fitted enlargement (ShadowModel is then "enlarged").</param>
 public sealed record CraterTimingsResponse(
     string Date,
     string Kind,
@@ -25,7 +26,8 @@ public sealed record CraterTimingsResponse(
     string FeatureSource,
     int ReachedCount,
     IReadOnlyList<CraterTimingResponse> Features,
-    string DataVersion);
+    string DataVersion,
+    Common.MeasuredShadowEcho? MeasuredShadow = null);
 
 /// <summary>The site the visibility refers to.</summary>
 /// <param name="Name">Its name, when given.</param>

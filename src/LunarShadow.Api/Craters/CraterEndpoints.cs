@@ -30,19 +30,20 @@ internal static class CraterEndpoints
         routes.MapGet("/api/v1/eclipses/{date}/craters", Get)
             .WithName("GetCraterTimings")
             .WithTags("Eclipses")
-            .Takes(new EndpointParameters([Parameters.EclipseDate, Features, Penumbra, .. Parameters.Site, .. Parameters.Model, Formats.Parameter]))
+            .Takes(new EndpointParameters([Parameters.EclipseDate, Features, Penumbra, .. Parameters.Site, .. Parameters.MeasurableModel, Formats.Parameter]))
             .WithSummary("When the umbra's edge crosses named features on the Moon")
-            .WithDescription("For about fifty features that observers time (coordinates from the IAU/USGS Gazetteer of Planetary Nomenclature), the instants the umbra's edge reaches them (immersion) and leaves them (emersion), under the chosen shadow model evaluated at each feature's own distance along the shadow, in UTC and TT with ΔT's uncertainty, with the feature's position angle on the disc; in the order the umbra reaches them, features it never reaches last. A crossing is the same instant for every observer: a site (lat, lon, tz) adds only whether the Moon is up and the sky state. penumbra=true adds the penumbra's crossings. JSON, CSV, or iCalendar for a few features (features=Tycho,Plato).")
+            .WithDescription("For about fifty features that observers time (coordinates from the IAU/USGS Gazetteer of Planetary Nomenclature), the instants the umbra's edge reaches them (immersion) and leaves them (emersion), under the chosen shadow model evaluated at each feature's own distance along the shadow, in UTC and TT with ΔT's uncertainty, with the feature's position angle on the disc; in the order the umbra reaches them, features it never reaches last. A crossing is the same instant for every observer: a site (lat, lon, tz) adds only whether the Moon is up and the sky state. penumbra=true adds the penumbra's crossings. shadow=measured uses the enlargement fitted to the timings observers have stored for this eclipse (409 with too few). JSON, CSV, or iCalendar for a few features (features=Tycho,Plato).")
             .Produces<CraterTimingsResponse>(StatusCodes.Status200OK, "application/json", "text/csv", "text/calendar")
-            .ProducesEclipseProblems();
+            .ProducesEclipseProblems()
+            .ProducesProblem(StatusCodes.Status409Conflict);
         return routes;
     }
 
-    internal static IResult Get(HttpRequest request)
+    internal static async Task<IResult> Get(HttpRequest request)
     {
         var f = RequestFields.FromQuery(request, new QueryReader());
         var reader = f.Reader;
-        var query = EclipseLookup.Read(request, f, Formats);
+        var query = EclipseLookup.ReadMeasurable(request, f, Formats);
         var chosen = ReadFeatures(reader, f.Raw(Features));
         var withPenumbra = f.Boolean(Penumbra);
         var site = SiteParameters.ReadSite(f, required: false);
@@ -52,12 +53,13 @@ internal static class CraterEndpoints
             if (chosen is null) reader.Fail("features", $"An iCalendar download needs features=Name,Name (1 to {MaxCalendarFeatures} features), e.g. features=Tycho,Plato.");
             else if (chosen.Count > MaxCalendarFeatures) reader.Fail("features", $"An iCalendar download takes at most {MaxCalendarFeatures} features; got {chosen.Count}.");
         }
-        if (EclipseLookup.Resolve(f, query, Formats, out var eclipse) is { } problem) return problem;
+        var (problem, eclipse, measured) = await EclipseLookup.ResolveAsync(request, f, query, Formats);
+        if (problem is not null) return problem;
         var time = query.Time;
 
         var list = chosen ?? LunarFeatureCatalog.All;
         var timings = new FeatureShadowCrossings(eclipse).Compute(list);
-        var response = CraterMapping.ToResponse(eclipse, timings, time, site, withPenumbra);
+        var response = CraterMapping.ToResponse(eclipse, timings, time, site, withPenumbra) with { MeasuredShadow = measured };
         switch (output)
         {
             case OutputFormat.Csv:

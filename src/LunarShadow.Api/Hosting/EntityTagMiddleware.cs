@@ -8,7 +8,8 @@ namespace LunarShadow.Api.Hosting;
 /// Makes GET answers of the API cacheable: a strong ETag from the response bytes (as encoded) and the versions of the
 /// ephemeris data and the tzdb, Cache-Control so that shared caches may keep them, and 304 for a matching If-None-Match.
 /// Every answer is a pure function of the request, the embedded data and the tzdb, except "upcoming" without a start
-/// date, which depends on today and is cached briefly.
+/// date, which depends on today and is cached briefly, and answers from the observers' log (the enlargement,
+/// shadow=measured, danjonL=reported), which caches must revalidate every time (no-cache: the ETag makes that cheap).
 /// </summary>
 internal sealed class EntityTagMiddleware(RequestDelegate next)
 {
@@ -49,7 +50,8 @@ internal sealed class EntityTagMiddleware(RequestDelegate next)
         var tag = $"\"{hash}-{Versions}\"";
         context.Response.Headers[HeaderNames.ETag] = tag;
         var dependsOnToday = context.Request.Path.StartsWithSegments("/api/v1/sites/upcoming") && string.IsNullOrEmpty(context.Request.Query["from"]);
-        context.Response.Headers[HeaderNames.CacheControl] = dependsOnToday ? "public, max-age=600" : $"public, max-age={MaxAgeSeconds}";
+        context.Response.Headers[HeaderNames.CacheControl] = LiveObservationsPolicy.DependsOnObservations(context.Request) ? "public, no-cache"
+            : dependsOnToday ? "public, max-age=600" : $"public, max-age={MaxAgeSeconds}";
         var ifNoneMatch = context.Request.GetTypedHeaders().IfNoneMatch;
         if (ifNoneMatch.Any(t => t.Tag.ToString() == tag || t.Equals(EntityTagHeaderValue.Any)))
         {

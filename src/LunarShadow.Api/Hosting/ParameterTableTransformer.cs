@@ -105,6 +105,14 @@ internal sealed class ParameterTableTransformer : IOpenApiOperationTransformer
             {
                 Type = JsonSchemaType.Array, UniqueItems = true, Items = new OpenApiSchema { Type = JsonSchemaType.String, Enum = Names(p) },
             },
+            ParameterType.NumberOrChoice => new OpenApiSchema
+            {
+                OneOf =
+                [
+                    new OpenApiSchema { Type = JsonSchemaType.Number, Minimum = Text(p.Minimum), Maximum = Text(p.Maximum) },
+                    new OpenApiSchema { Type = JsonSchemaType.String, Enum = Names(p) },
+                ],
+            },
             _ => new OpenApiSchema { Type = JsonSchemaType.String, Pattern = p.Pattern, MaxLength = p.MaxLength },
         };
         if (p.Type is ParameterType.Number or ParameterType.Integer)
@@ -129,9 +137,10 @@ internal sealed class ParameterTableTransformer : IOpenApiOperationTransformer
     private static string Describe(Parameter p)
     {
         var text = p.Description;
-        if (p.Type is ParameterType.Number or ParameterType.Integer) text += $" {char.ToUpperInvariant(p.RangeText[0])}{p.RangeText[1..]}.";
+        if (p.Type is ParameterType.Number or ParameterType.Integer or ParameterType.NumberOrChoice) text += $" {char.ToUpperInvariant(p.RangeText[0])}{p.RangeText[1..]}.";
         if (p.Type is ParameterType.Date) text += " Astronomers' calendar: Julian before 1582-10-15, year 0 = 1 BC, negative years allowed.";
-        if (p.Allowed is { } allowed) text += $" One of: {string.Join(", ", allowed)}{(p.Type == ParameterType.ChoiceList ? " (comma-separated)" : "")}.";
+        if (p.Allowed is { } allowed)
+            text += $" {(p.Type == ParameterType.NumberOrChoice ? "Or one of" : "One of")}: {string.Join(", ", allowed)}{(p.Type == ParameterType.ChoiceList ? " (comma-separated)" : "")}.";
         if (p.Default is { } d) text += FormattableString.Invariant($" Default: {(d is bool b ? (b ? "true" : "false") : d)}.");
         return text;
     }

@@ -61,6 +61,7 @@ internal static class Pipeline
         app.MapPhotoEndpoints();
         app.MapCraterEndpoints();
         app.MapObservationEndpoints();
+        app.MapEnlargementEndpoints();
         return app;
     }
 }

@@ -18,6 +18,7 @@ internal static class ServiceRegistration
         builder.Services.AddLunarShadowForwardedHeaders(builder.Configuration);
         builder.Services.AddSingleton<LunarShadow.Astronomy.Eclipses.EclipseFinders>(); // the eclipse caches, one set per host
         builder.Services.AddObservationStorage(builder.Configuration);
+        builder.Services.AddObservationReading();
         builder.Services.AddLunarShadowRateLimiting(builder.Configuration);
         builder.Services.AddPublicReadCors();
         builder.Services.AddHealthChecks().AddCheck<ReadinessCheck>("ephemeris", tags: ["ready"]);
@@ -31,6 +32,7 @@ internal static class ServiceRegistration
         {
             options.AddBasePolicy(policy => policy.With(c => c.HttpContext.Request.Path.StartsWithSegments("/api"))
                 .SetVaryByQuery("*").SetVaryByHeader("Accept").Expire(TimeSpan.FromHours(1)));
+            options.AddBasePolicy(new LiveObservationsPolicy());
             options.SizeLimit = builder.Configuration.GetValue("OutputCacheMegabytes", 128L) * 1024 * 1024;
         });
         builder.Services.AddProblemDetails();

@@ -11,9 +11,11 @@ namespace LunarShadow.Api.Photography;
 /// <param name="Framing">Field of view, image scale, blur limits, time in a fixed frame.</param>
 /// <param name="Sequences">Multi-exposure and time-lapse plans (null when nothing is visible).</param>
 /// <param name="Cautions">Safety notes.</param>
+/// <param name="MeasuredShadow">With shadow=measured: the crater timings used and the fitted enlargement.</param>
 public sealed record PhotoPlanResponse(
     Common.SiteEcho Site, Common.EclipseBrief Eclipse, Common.NightResponse Night, CameraEcho Camera, string Summary, BrightnessModelEcho Model,
-    IReadOnlyList<TimelineRowResponse> Timeline, FramingResponse Framing, SequencesResponse? Sequences, IReadOnlyList<string> Cautions);
+    IReadOnlyList<TimelineRowResponse> Timeline, FramingResponse Framing, SequencesResponse? Sequences, IReadOnlyList<string> Cautions,
+    Common.MeasuredShadowEcho? MeasuredShadow = null);
 
 /// <summary>The camera as understood.</summary>
 /// <param name="SensorWidthMm">Sensor width, mm.</param>
@@ -34,7 +36,8 @@ public sealed record CameraEcho(double SensorWidthMm, double SensorHeightMm, dou
 /// <param name="ExtinctionPerAirMass">Extinction coefficient, magnitudes per air mass.</param>
 /// <param name="UncertaintyStops">One-sigma uncertainty of the totality brightness, stops.</param>
 /// <param name="Note">How to read the numbers.</param>
-public sealed record BrightnessModelEcho(double DanjonL, double ExtinctionPerAirMass, double UncertaintyStops, string Note)
+/// <param name="Reported">With danjonL=reported: the observers' estimates used, or the fallback and why.</param>
+public sealed record BrightnessModelEcho(double DanjonL, double ExtinctionPerAirMass, double UncertaintyStops, string Note, DanjonReportsEcho? Reported = null)
 {
     /// <summary>Deprecated: the former name of <see cref="DanjonL"/>, written for one more release.</summary>
     public double Danjon => DanjonL;

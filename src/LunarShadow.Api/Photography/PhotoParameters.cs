@@ -72,11 +72,14 @@ internal static class PhotoParameters
         Allowed = [.. Mounts.Keys], Default = "fixed",
     };
 
+    /// <summary>The word for "the median of the Danjon estimates observers have stored for this eclipse".</summary>
+    public const string ReportedDanjon = "reported";
+
     /// <summary>The expected Danjon luminosity; "danjon" is its former name (it also names a shadow model).</summary>
-    public static readonly Parameter DanjonL = new("danjonL", ParameterType.Number,
-        "Expected Danjon luminosity L of totality, 0 (very dark) to 4 (bright), fractions allowed.")
+    public static readonly Parameter DanjonL = new("danjonL", ParameterType.NumberOrChoice,
+        $"Expected Danjon luminosity L of totality, 0 (very dark) to 4 (bright), fractions allowed; or {ReportedDanjon}: the median of the Danjon estimates observers have stored for this eclipse (with their spread and count in model.reported), falling back to the default {UmbralGlow.DefaultDanjon} and saying so when there are none.")
     {
-        Unit = "Danjon L", Minimum = 0, Maximum = 4, Default = UmbralGlow.DefaultDanjon, FormerNames = ["danjon"],
+        Unit = "Danjon L", Minimum = 0, Maximum = 4, Default = UmbralGlow.DefaultDanjon, FormerNames = ["danjon"], Allowed = [ReportedDanjon],
     };
 
     public static readonly Parameter Interval = new("interval", ParameterType.Number, "Timeline step.")

@@ -9,7 +9,8 @@ namespace LunarShadow.Api.Photography;
 /// <summary>Reads a camera and plan settings from named fields (query string or JSON body), reporting every problem.</summary>
 internal static class PhotoRequest
 {
-    public static (Camera? Camera, PhotoSettings? Settings) Read(RequestFields f, TimeScaleConverter time)
+    /// <summary>The camera and settings; <c>DanjonReported</c> when danjonL=reported (the settings then hold the default L).</summary>
+    public static (Camera? Camera, PhotoSettings? Settings, bool DanjonReported) Read(RequestFields f, TimeScaleConverter time)
     {
         var iso = f.Number(P.Iso)!.Value;
         var aperture = f.Number(P.Aperture)!.Value;
@@ -25,7 +26,8 @@ internal static class PhotoRequest
         var pitch = f.Number(P.PixelPitch);
         var pixels = f.Number(P.Pixels)!.Value;
         var mount = P.Mounts[f.Choice(P.MountChoice)!];
-        var danjon = f.Number(P.DanjonL)!.Value;
+        var (danjonNumber, danjonWord) = f.NumberOrChoice(P.DanjonL);
+        var danjon = danjonNumber ?? UmbralGlow.DefaultDanjon;
         var interval = f.Number(P.Interval)!.Value;
         var bracket = f.Integer(P.Bracket)!.Value;
         var blur = f.Number(P.Blur)!.Value;
@@ -34,13 +36,13 @@ internal static class PhotoRequest
         var lapse = f.Number(P.TimelapseInterval)!.Value;
         var fileSize = f.Number(P.FileSize)!.Value;
         var start = f.Instant(P.Start);
-        if (!f.Reader.IsValid) return (null, null);
+        if (!f.Reader.IsValid) return (null, null, false);
 
         var pixelPitch = pitch ?? width / pixels * 1000;
         var camera = new Camera(width, height, pixelPitch, focal, multiplier, mount, iso, aperture, shutter, fastest, slowest);
         var settings = new PhotoSettings(danjon, interval, bracket, blur, extinction, gap, lapse, fileSize,
             start is { } s ? time.ToTerrestrialTime(s) : null);
-        return (camera, settings);
+        return (camera, settings, danjonWord == P.ReportedDanjon);
     }
 
     private static (double Width, double Height) Sensor(RequestFields f)

@@ -9,10 +9,22 @@ internal static class ModelChoice
     /// <summary>The shadow model and the time scales (defaults where absent), with problems reported on the fields' reader.</summary>
     public static (ShadowModel Model, TimeScaleConverter Time) Read(RequestFields f) => (Shadow(f), new TimeScaleConverter(DeltaT(f)));
 
-    /// <summary>The shadow model; danjon when absent.</summary>
-    public static ShadowModel Shadow(RequestFields f)
+    /// <summary>
+    /// As <see cref="Read(RequestFields)"/>, also taking shadow=measured: then the model is danjon, the one the eclipse is
+    /// first found under, and <c>Measured</c> is true (the caller fits the timings and finds it again).
+    /// </summary>
+    public static (ShadowModel Model, bool Measured, TimeScaleConverter Time) ReadMeasurable(RequestFields f)
     {
-        var name = f.Choice(Parameters.Shadow)!;
+        var name = f.Choice(Parameters.MeasurableShadow)!;
+        var measured = name == Parameters.MeasuredShadow;
+        return (Shadow(f, measured ? "danjon" : name), measured, new TimeScaleConverter(DeltaT(f)));
+    }
+
+    /// <summary>The shadow model; danjon when absent.</summary>
+    public static ShadowModel Shadow(RequestFields f) => Shadow(f, f.Choice(Parameters.Shadow)!);
+
+    private static ShadowModel Shadow(RequestFields f, string name)
+    {
         var height = f.Number(Parameters.LayerKm)!.Value;
         if (f.Has(Parameters.LayerKm) && name != "layer")
             f.Fail(Parameters.LayerKm, $"{f.FieldName(Parameters.LayerKm)} applies only with shadow=layer.");

@@ -24,6 +24,9 @@ internal enum ParameterType
     /// <summary>A comma-separated list of <see cref="Parameter.Allowed"/> values.</summary>
     ChoiceList,
 
+    /// <summary>A finite decimal number within [Minimum, Maximum], or one of <see cref="Parameter.Allowed"/> (case-insensitive).</summary>
+    NumberOrChoice,
+
     /// <summary>Free or patterned text read by its own rule (time zone, horizon profile, opening hours, sensor).</summary>
     Text,
 }

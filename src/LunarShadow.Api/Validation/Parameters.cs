@@ -89,6 +89,16 @@ internal static class Parameters
         Allowed = ShadowModel.Names, Default = "danjon",
     };
 
+    /// <summary>The shadow choice that uses the crater timings stored for the eclipse.</summary>
+    public const string MeasuredShadow = "measured";
+
+    /// <summary>The shadow choice of the endpoints that can use the observers' log (local, photo-plan, craters).</summary>
+    public static readonly Parameter MeasurableShadow = Shadow with
+    {
+        Allowed = [.. ShadowModel.Names, MeasuredShadow],
+        Description = Shadow.Description + $" Or measured: the geometric umbra enlarged by the percentage fitted to this eclipse's stored crater timings (at least {LunarShadow.Astronomy.Eclipses.UmbralEnlargementFit.MinimumTimings}; fewer give a 409 problem); the response says how many timings were used and the fitted value.",
+    };
+
     public static readonly Parameter LayerKm = new("layerKm", ParameterType.Number,
         "Opaque-layer height for shadow=layer (default after Herald & Sinnott 2014).")
     {
@@ -110,6 +120,9 @@ internal static class Parameters
 
     /// <summary>The computation choices of every eclipse endpoint.</summary>
     public static readonly IReadOnlyList<Parameter> Model = [Shadow, LayerKm, DeltaT, DeltaTModel];
+
+    /// <summary>The computation choices of the endpoints that also take shadow=measured.</summary>
+    public static readonly IReadOnlyList<Parameter> MeasurableModel = [MeasurableShadow, LayerKm, DeltaT, DeltaTModel];
 
     /// <summary>The response format among those an endpoint offers (the first is the default).</summary>
     public static Parameter Format(IReadOnlyList<string> names) => new("format", ParameterType.Choice,

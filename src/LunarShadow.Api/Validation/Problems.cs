@@ -25,6 +25,9 @@ internal static class Problems
     public static ProblemHttpResult Conflict(string detail, string field) => TypedResults.Problem(
         detail: detail, statusCode: StatusCodes.Status409Conflict, title: "Already stored.", type: "https://lunarshadow.invalid/problems/duplicate",
         extensions: new Dictionary<string, object?> { ["field"] = field });
+    /// <summary>409 for a request the service cannot answer yet in its present state (e.g. too few observations).</summary>
+    public static ProblemHttpResult NotYet(string detail) => TypedResults.Problem(
+        detail: detail, statusCode: StatusCodes.Status409Conflict, title: "Not possible yet.", type: "https://lunarshadow.invalid/problems/not-yet");
 
     /// <summary>413 for a body or batch over the limit.</summary>
     public static ProblemHttpResult TooLarge(string detail) => TypedResults.Problem(

@@ -63,6 +63,24 @@ internal sealed class RequestFields(QueryReader reader, Func<string, string?> so
         return value ?? p.NumberDefault;
     }
 
+    /// <summary>
+    /// One of the allowed words, or else a number in range (the default when absent or invalid; a problem naming both the
+    /// range and the words is then on the reader).
+    /// </summary>
+    public (double? Number, string? Choice) NumberOrChoice(Parameter p)
+    {
+        var raw = Raw(p);
+        if (string.IsNullOrWhiteSpace(raw)) return (p.NumberDefault, null);
+        var word = p.Allowed!.FirstOrDefault(a => string.Equals(a, raw.Trim(), StringComparison.OrdinalIgnoreCase));
+        if (word is not null) return (null, word);
+        if (!double.TryParse(raw, System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out _))
+        {
+            Fail(p, $"{FieldName(p)} must be a number {p.RangeText}, or one of {string.Join(", ", p.Allowed!)}; got '{Clip(raw)}'.");
+            return (p.NumberDefault, null);
+        }
+        return (Number(p), null);
+    }
+
     /// <summary>A whole number in range; the default when absent or invalid (a problem is then on the reader).</summary>
     public int? Integer(Parameter p)
     {

@@ -29,6 +29,7 @@ public static class ShadowCrossSection
             ShadowModelKind.Danjon => Danjon(moonParallax, sunParallax, sunRadius),
             ShadowModelKind.Chauvenet => Chauvenet(moonParallax, sunParallax, sunRadius),
             ShadowModelKind.None => Geometric(moonParallax, sunParallax, sunRadius),
+            ShadowModelKind.Enlarged => Enlarged(Geometric(moonParallax, sunParallax, sunRadius), model.EnlargementPercent),
             _ => OpaqueLayer(moonParallax, sunParallax, sunRadius, model.LayerHeightKm, g.AxisDeclinationRadians, direction.Radians),
         };
     }
@@ -48,6 +49,14 @@ public static class ShadowCrossSection
     private static ShadowRadii Geometric(double moonParallax, double sunParallax, double sunRadius) => new(
         Angle.FromRadians(MeanRadiusRatio * moonParallax + sunParallax - sunRadius),
         Angle.FromRadians(MeanRadiusRatio * moonParallax + sunParallax + sunRadius));
+
+    // Soulsby's crater-timing reductions (E% = (Ro − Rc)/Rc, Rc the geometric umbral radius), inverted: the umbra is
+    // Rc·(1 + E/100); the penumbra grows by the same angle, as under Danjon's rule and the opaque layer.
+    private static ShadowRadii Enlarged(ShadowRadii geometric, double percent)
+    {
+        var growth = geometric.Umbra.Radians * percent / 100;
+        return new ShadowRadii(Angle.FromRadians(geometric.Umbra.Radians + growth), Angle.FromRadians(geometric.Penumbra.Radians + growth));
+    }
 
     // Herald & Sinnott (2014), J. Br. Astron. Assoc. 124, 247: an opaque layer of height h above the ellipsoid. The
     // limb seen along the shadow axis (declination δ) is an ellipse with semi-axes a + h (east–west) and

@@ -14,12 +14,19 @@ public enum ShadowModelKind
 
     /// <summary>An opaque layer of given height above the WGS84 ellipsoid: an elliptical cross-section.</summary>
     Layer,
+
+    /// <summary>
+    /// The geometric umbra enlarged by a given percentage of its own radius (as crater timings measure it); the penumbra
+    /// grows by the same angle, as both cones are tangent to the same enlarged Earth.
+    /// </summary>
+    Enlarged,
 }
 
 /// <summary>A shadow model with its parameter.</summary>
 /// <param name="Kind">Which rule.</param>
 /// <param name="LayerHeightKm">Height of the opaque layer, km (used by <see cref="ShadowModelKind.Layer"/> only).</param>
-public sealed record ShadowModel(ShadowModelKind Kind, double LayerHeightKm = ShadowModel.DefaultLayerHeightKm)
+/// <param name="EnlargementPercent">Umbral enlargement over the geometric umbra, percent of its radius (used by <see cref="ShadowModelKind.Enlarged"/> only).</param>
+public sealed record ShadowModel(ShadowModelKind Kind, double LayerHeightKm = ShadowModel.DefaultLayerHeightKm, double EnlargementPercent = 0)
 {
     /// <summary>Default opaque-layer height, 87 km, after Herald &amp; Sinnott (2014), J. Br. Astron. Assoc. 124, 247.</summary>
     public const double DefaultLayerHeightKm = 87;
@@ -36,7 +43,10 @@ public sealed record ShadowModel(ShadowModelKind Kind, double LayerHeightKm = Sh
     /// <summary>An opaque layer of the given height.</summary>
     public static ShadowModel Layer(double heightKm = DefaultLayerHeightKm) => new(ShadowModelKind.Layer, heightKm);
 
-    /// <summary>The public names.</summary>
+    /// <summary>The geometric umbra enlarged by <paramref name="percent"/> of its radius (a measured enlargement).</summary>
+    public static ShadowModel Enlarged(double percent) => new(ShadowModelKind.Enlarged, DefaultLayerHeightKm, percent);
+
+    /// <summary>The public names a caller may choose by name (an enlarged model is made from a measurement, not by name).</summary>
     public static IReadOnlyList<string> Names { get; } = ["danjon", "chauvenet", "none", "layer"];
 
     /// <summary>The model's public name.</summary>
@@ -45,6 +55,7 @@ public sealed record ShadowModel(ShadowModelKind Kind, double LayerHeightKm = Sh
         ShadowModelKind.Danjon => "danjon",
         ShadowModelKind.Chauvenet => "chauvenet",
         ShadowModelKind.None => "none",
+        ShadowModelKind.Enlarged => "enlarged",
         _ => "layer",
     };
 

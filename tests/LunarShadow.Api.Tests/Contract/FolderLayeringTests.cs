@@ -8,7 +8,7 @@ namespace LunarShadow.Api.Tests.Contract;
 /// </summary>
 public partial class FolderLayeringTests
 {
-    private static readonly string[] Features = ["Eclipses", "Ephemeris", "Sites", "Photography", "Observations"];
+    private static readonly string[] Features = ["Eclipses", "Ephemeris", "Sites", "Photography", "Craters", "Observations"];
 
     // What each folder may use, besides itself.
     private static readonly Dictionary<string, string[]> Allowed = new()
@@ -20,6 +20,7 @@ public partial class FolderLayeringTests
         ["Ephemeris"] = ["Common", "Validation", "Formatting"],
         ["Sites"] = ["Common", "Validation", "Formatting"],
         ["Photography"] = ["Common", "Validation", "Formatting"],
+        ["Craters"] = ["Common", "Validation", "Formatting"],
         ["Observations"] = ["Common", "Validation", "Formatting"],
         ["Hosting"] = ["Common", "Validation", "Formatting", .. Features],
     };
@@ -55,6 +56,6 @@ public partial class FolderLayeringTests
     }
 
     // "using LunarShadow.Api.X", or a partly qualified "X.Type" reference (the form that once hid a cycle).
-    [GeneratedRegex(@"LunarShadow\.Api\.(?<folder>Formatting|Validation|Common|Eclipses|Ephemeris|Sites|Photography|Observations|Hosting)\b|(?<![\w.])(?<folder>Formatting|Validation|Common|Eclipses|Ephemeris|Sites|Photography|Observations|Hosting)\.[A-Z]")]
+    [GeneratedRegex(@"LunarShadow\.Api\.(?<folder>Formatting|Validation|Common|Eclipses|Ephemeris|Sites|Photography|Craters|Observations|Hosting)\b|(?<![\w.])(?<folder>Formatting|Validation|Common|Eclipses|Ephemeris|Sites|Photography|Craters|Observations|Hosting)\.[A-Z]")]
     private static partial Regex ApiReference();
 }

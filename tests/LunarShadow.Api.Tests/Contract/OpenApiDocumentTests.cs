@@ -57,7 +57,8 @@ public class OpenApiDocumentTests(ApiFactory factory) : IClassFixture<ApiFactory
         Assert.True(numeric.Count >= 53, $"only {numeric.Count} numeric parameters across the operations");
         foreach (var (operation, parameter) in numeric)
         {
-            var schema = parameter.Schema!;
+            // A number that also takes a word (danjonL=reported) is a oneOf of the ranged number and the words.
+            var schema = parameter.Schema!.OneOf?.FirstOrDefault(s => s.Type == JsonSchemaType.Number) ?? parameter.Schema!;
             Assert.True(schema.Type is JsonSchemaType.Number or JsonSchemaType.Integer, $"{operation}.{parameter.Name} is {schema.Type}");
             Assert.True(schema.Minimum is not null || schema.ExclusiveMinimum is not null, $"{operation}.{parameter.Name} has no minimum");
             Assert.NotNull(schema.Maximum);
@@ -82,8 +83,16 @@ public class OpenApiDocumentTests(ApiFactory factory) : IClassFixture<ApiFactory
             else if (schema.Type == JsonSchemaType.String && schema.Format is null)
                 Assert.True(TextParameters.Contains(parameter.Name) || parameter.Deprecated, $"{where} is untyped text");
         }
-        var shadow = Parameters(document).First(p => p.Parameter.Name == "shadow").Parameter.Schema!;
+        var shadow = Parameters(document).First(p => p.Operation == "GetEclipse" && p.Parameter.Name == "shadow").Parameter.Schema!;
         Assert.Equal(["danjon", "chauvenet", "none", "layer"], shadow.Enum!.Select(e => e.GetValue<string>()));
+        // measured only where the observers' log is used.
+        foreach (var operation in new[] { "GetCraterTimings", "GetLocalCircumstances", "GetPhotoPlan" })
+        {
+            var measurable = Parameters(document).First(p => p.Operation == operation && p.Parameter.Name == "shadow").Parameter.Schema!;
+            Assert.Equal(["danjon", "chauvenet", "none", "layer", "measured"], measurable.Enum!.Select(e => e.GetValue<string>()));
+        }
+        var danjonL = Parameters(document).First(p => p.Operation == "GetPhotoPlan" && p.Parameter.Name == "danjonL").Parameter.Schema!;
+        Assert.Equal(["reported"], danjonL.OneOf!.Single(s => s.Type == JsonSchemaType.String).Enum!.Select(e => e.GetValue<string>()));
         var date = Parameters(document).First(p => p.Operation == "GetEclipse" && p.Parameter.Name == "date").Parameter;
         Assert.Equal(("date", ParameterLocation.Path), (date.Schema!.Format, date.In!.Value));
         Assert.Contains("1582-10-15", date.Description, StringComparison.Ordinal);

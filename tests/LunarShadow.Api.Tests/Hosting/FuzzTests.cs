@@ -19,7 +19,7 @@ public class FuzzTests
         "2025-03-14T06:58:00Z", "2025-03-14T25:00:00Z", "2025-03-14T06:58:00+19:00", "Europe/Nowhere", "UTC", "Etc/GMT+14",
         "19:00-23:30", "24:00-01:00", "07:00-07:00", "90:5,180:12", "90:5,abc", "400:5", "1:2:3", "36x24", "0x0", "1e3x1e3",
         "danjon", "layer", "chauvenet", "none", "best", "espenak-meeus-2006", "json", "csv", "ics", "sequence", "geojson", "xml",
-        "total,partial", "annular", "fixed", "lunar", "gimbal", "-5", "5", "50", "51", "500", "100000", "409601", "0.94", "64.1",
+        "total,partial", "annular", "fixed", "lunar", "gimbal", "measured", "reported", "Tycho,Plato", "-5", "5", "50", "51", "500", "100000", "409601", "0.94", "64.1",
         // Digits of other scripts, which a regex \d accepts and the number parser refuses (Unicode UAX #44 category Nd).
         "2025-٠٣-١٤", "١٩:00-23:00", "19:00-٢٣:30", "2025-03-14T٠٦:00:00Z", "２０２５-03-14", "2025-03-14T06:00:00.١Z", "१२", "٤٧.٠٧",
         "2025-09-07T18:00+٠٢:00", "٠٩٠:5,180:12", "2026-03-03T11:33:00Z",
@@ -37,9 +37,11 @@ public class FuzzTests
         ("/api/v1/eclipses/{date}", ["shadow", "layerKm", "deltaT", "deltaTModel", "format"]),
         ("/api/v1/eclipses/{date}/local", ["lat", "lon", "elevation", "tz", "minAltitude", "horizon", "pressure", "temperature", "name", "open", "shadow", "deltaT", "format"]),
         ("/api/v1/sites/upcoming", ["lat", "lon", "tz", "from", "count", "phase", "night", "open", "minAltitude", "pressure", "temperature", "horizon", "format"]),
-        ("/api/v1/eclipses/{date}/photo-plan", ["lat", "lon", "tz", "iso", "aperture", "shutter", "focalLength", "teleconverter", "sensor", "pixelPitch", "pixels", "mount", "danjon", "danjonL", "pressure", "temperature", "interval", "bracket", "blur", "extinction", "gap", "timelapseInterval", "fileSize", "start", "format"]),
+        ("/api/v1/eclipses/{date}/photo-plan", ["lat", "lon", "tz", "iso", "aperture", "shutter", "focalLength", "teleconverter", "sensor", "pixelPitch", "pixels", "mount", "danjon", "danjonL", "shadow", "pressure", "temperature", "interval", "bracket", "blur", "extinction", "gap", "timelapseInterval", "fileSize", "start", "format"]),
         ("/api/v1/eclipses/{date}/visibility-map", ["shadow", "deltaT", "format"]),
         ("/api/v1/eclipses/{date}/observations", ["kind", "format"]),
+        ("/api/v1/eclipses/{date}/craters", ["features", "penumbra", "lat", "lon", "tz", "shadow", "layerKm", "deltaT", "format"]),
+        ("/api/v1/eclipses/{date}/enlargement", ["deltaT", "deltaTModel", "format", "shadow"]),
     ];
 
     // Several eclipses (total 2025-09-07, partial 2026-03-03 is total, 2029-12-20 total; NASA five-millennium canon, from
