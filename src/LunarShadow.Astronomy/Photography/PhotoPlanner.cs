@@ -29,7 +29,8 @@ public static class PhotoPlanner
         foreach (var (tt, label) in RowInstants(local, settings.IntervalMinutes))
             rows.Add(Row(tt, label));
         var sequences = visible.Count == 0 ? null : Sequence(sky, night, camera, settings, visible);
-        return new PhotoPlan(local, camera, settings, k, rows, framing, sequences, UmbralGlow.UncertaintyStops, Cautions(local));
+        var (timeline, notes) = PlanNotes.Group(rows);
+        return new PhotoPlan(local, camera, settings, k, timeline, framing, sequences, UmbralGlow.UncertaintyStops, Cautions(local), notes);
 
         TimelineRow Row(TtInstant tt, string? label)
         {
