@@ -13,9 +13,14 @@ public static class PhotoPlanner
     private const double LowAltitudeDegrees = 10;
 
     /// <summary>The plan.</summary>
-    public static PhotoPlan Plan(LunarEclipse eclipse, Site site, Camera camera, PhotoSettings settings, TimeScaleConverter time)
+    public static PhotoPlan Plan(LunarEclipse eclipse, Site site, Camera camera, PhotoSettings settings, TimeScaleConverter time) =>
+        Plan(LocalCircumstancesCalculator.Compute(eclipse, site, time), camera, settings, time);
+
+    /// <summary>The plan for local circumstances already computed (several cameras at one site share them).</summary>
+    public static PhotoPlan Plan(LocalCircumstances local, Camera camera, PhotoSettings settings, TimeScaleConverter time)
     {
-        var local = LocalCircumstancesCalculator.Compute(eclipse, site, time);
+        var eclipse = local.Eclipse;
+        var site = local.Site;
         var sky = new LocalSky(eclipse.NightSky, site, local.DeltaTSeconds);
         var night = eclipse.NightSky;
         var passage = eclipse.Passage;
