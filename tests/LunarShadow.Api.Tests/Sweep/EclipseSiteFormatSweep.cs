@@ -89,6 +89,7 @@ public class EclipseSiteFormatSweep(ITestOutputHelper output)
             // ISO changes arise): every mount × both camera set-ups, six plans per pair. Penumbral eclipses: both camera
             // set-ups with the mount cycling through all three across the grid, to keep the sweep's time in bounds.
             var visibleLocal = local;
+            var parsedCalendars = new HashSet<string>(StringComparer.Ordinal);
             IEnumerable<Camera> setups = eclipse.Kind == EclipseKind.Penumbral
                 ? SweepGrid.Cameras.Select((camera, c) => camera with
                 {
@@ -107,10 +108,11 @@ public class EclipseSiteFormatSweep(ITestOutputHelper output)
                     Renderings.Json(response);
                     Require(Readers.Csv(Renderings.PhotoCsv(response)).Count == response.Timeline.Count, "photo CSV rows differ from the timeline");
                     Sequence(Renderings.PhotoSequence(response), plan.Camera);
-                    // The photo plan's iCalendar is usually the site's, parsed above; it is parsed again when it differs.
+                    // The photo plan's iCalendar is usually the site's, parsed above, and the mount does not change it;
+                    // it is parsed once more for each distinct text.
                     var (status, ics) = Renderings.PhotoCalendar(plan);
                     Require(status == 200, $"photo iCalendar status {status}");
-                    if (ics != localCalendar) Readers.Calendar(ics);
+                    if (ics != localCalendar && parsedCalendars.Add(ics)) Readers.Calendar(ics);
                     Interlocked.Increment(ref plans);
                     Rendered(4);
                 });
