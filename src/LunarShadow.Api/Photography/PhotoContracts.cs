@@ -11,11 +11,25 @@ namespace LunarShadow.Api.Photography;
 /// <param name="Framing">Field of view, image scale, blur limits, time in a fixed frame.</param>
 /// <param name="Sequences">Multi-exposure and time-lapse plans (null when nothing is visible).</param>
 /// <param name="Cautions">Safety notes.</param>
+/// <param name="Notes">Notes that hold for a run of timeline rows (an ISO change), once per run with its time range.</param>
 /// <param name="MeasuredShadow">With shadow=measured: the crater timings used and the fitted enlargement.</param>
 public sealed record PhotoPlanResponse(
     Common.SiteEcho Site, Common.EclipseBrief Eclipse, Common.NightResponse Night, CameraEcho Camera, string Summary, BrightnessModelEcho Model,
     IReadOnlyList<TimelineRowResponse> Timeline, FramingResponse Framing, SequencesResponse? Sequences, IReadOnlyList<string> Cautions,
-    Common.MeasuredShadowEcho? MeasuredShadow = null);
+    IReadOnlyList<PlanNoteResponse> Notes, Common.MeasuredShadowEcho? MeasuredShadow = null);
+
+/// <summary>A note for a contiguous run of timeline rows, given once instead of on each row.</summary>
+/// <param name="Code">iso-changed.</param>
+/// <param name="Text">The note in words, naming its local time range.</param>
+/// <param name="FromUtc">The run's first row, UTC.</param>
+/// <param name="ToUtc">The run's last row, UTC.</param>
+/// <param name="FromLocal">The run's first row, local time with offset.</param>
+/// <param name="ToLocal">The run's last row, local time with offset.</param>
+/// <param name="FirstRow">Index of the run's first row in the timeline (from 0).</param>
+/// <param name="Rows">Rows in the run.</param>
+/// <param name="Numbers">Its numbers by name: fromIso, lowestIso, highestIso (see docs/photography.md).</param>
+public sealed record PlanNoteResponse(string Code, string Text, string FromUtc, string ToUtc, string FromLocal, string ToLocal, int FirstRow, int Rows,
+    IReadOnlyDictionary<string, double> Numbers);
 
 /// <summary>The camera as understood.</summary>
 /// <param name="SensorWidthMm">Sensor width, mm.</param>
@@ -120,4 +134,5 @@ public sealed record TimeLapseResponse(double IntervalSeconds, int Frames, doubl
 /// <param name="ShutterSeconds">Shutter, s.</param>
 /// <param name="Iso">ISO.</param>
 /// <param name="Aperture">f-number.</param>
-public sealed record SequenceStep(string Instant, double ShutterSeconds, double Iso, double Aperture);
+/// <param name="Note">A note that starts at this step and holds for a run of steps (e.g. the ISO change through totality), or null.</param>
+public sealed record SequenceStep(string Instant, double ShutterSeconds, double Iso, double Aperture, string? Note = null);

@@ -38,24 +38,34 @@ internal static class PhotoMapping
                     TimeFormats.Round(s.PathHeight.Degrees, 2), s.FitsLandscape, s.FitsPortrait, TimeFormats.Round(s.AimAzimuth.Degrees, 2), TimeFormats.Round(s.AimAltitude.Degrees, 2)),
                 new TimeLapseResponse(s.TimeLapseIntervalSeconds, s.TimeLapseFrames, TimeFormats.Round(s.TimeLapseMinutes, 1),
                     TimeFormats.Round(s.TimeLapsePlaybackSeconds, 1), TimeFormats.Round(s.TimeLapseStorageGigabytes, 2))),
-            plan.Cautions);
+            plan.Cautions,
+            plan.Notes.Select(n => new PlanNoteResponse(PhotoWarningText.Code(n.Code), PhotoWarningText.NoteSentence(n, zone),
+                TimeFormats.Utc(n.FromUtc), TimeFormats.Utc(n.ToUtc), TimeFormats.Local(n.FromUtc, zone).Text, TimeFormats.Local(n.ToUtc, zone).Text,
+                n.FirstRow, n.Rows, n.Numbers.ToDictionary(x => x.Key, x => TimeFormats.Round(x.Value, 4)))).ToList());
     }
 
     public static string Csv(PhotoPlanResponse r)
     {
         var csv = new CsvWriter().Row("utc", "local", "contact", "phase", "umbral_fraction", "penumbral_fraction", "moon_altitude_deg", "moon_azimuth_deg",
             "airmass", "brightness_stops", "shutter_s", "iso", "aperture", "bracket_stops", "warnings", "local_date");
-        foreach (var row in r.Timeline)
+        foreach (var (row, i) in r.Timeline.Select((row, i) => (row, i)))
             csv.Row(row.Utc, row.Local, row.Contact, row.Phase, row.UmbralFraction, row.PenumbralFraction, row.MoonAltitudeDegrees, row.MoonAzimuthDegrees,
-                row.Airmass, row.BrightnessStops, row.Exposure.ShutterSeconds, row.Exposure.Iso, row.Exposure.Aperture, row.Exposure.BracketStops, string.Join("; ", row.Warnings),
-                r.Night.Evening);
+                row.Airmass, row.BrightnessStops, row.Exposure.ShutterSeconds, row.Exposure.Iso, row.Exposure.Aperture, row.Exposure.BracketStops,
+                string.Join("; ", row.Warnings.Concat(NotesStartingAt(r, i))), r.Night.Evening);
         return csv.ToString();
     }
 
-    /// <summary>Every exposure of every bracket, in time order: what a camera-control script steps through.</summary>
+    /// <summary>
+    /// Every exposure of every bracket, in time order: what a camera-control script steps through. A note for a run of
+    /// rows rides on the first step of the run's first row.
+    /// </summary>
     public static List<SequenceStep> Sequence(PhotoPlanResponse r) => r.Timeline
-        .SelectMany(row => row.Exposure.BracketShutterSeconds.Select(t => new SequenceStep(row.Utc, t, row.Exposure.Iso, row.Exposure.Aperture)))
+        .SelectMany((row, i) => row.Exposure.BracketShutterSeconds.Select((t, k) =>
+            new SequenceStep(row.Utc, t, row.Exposure.Iso, row.Exposure.Aperture, k == 0 && NotesStartingAt(r, i).Any() ? string.Join("; ", NotesStartingAt(r, i)) : null)))
         .ToList();
+
+    // The words of the run notes that start at a timeline row: each note is written once, at its run's first row.
+    private static IEnumerable<string> NotesStartingAt(PhotoPlanResponse r, int row) => r.Notes.Where(n => n.FirstRow == row).Select(n => n.Text);
 
     // Shutter times to four significant figures.
     private static double Seconds(double t) => t <= 0 ? 0 : Math.Round(t, Math.Max(0, 3 - (int)Math.Floor(Math.Log10(t))));

@@ -1,5 +1,7 @@
 using System.Globalization;
+using LunarShadow.Api.Formatting;
 using LunarShadow.Astronomy.Photography;
+using NodaTime;
 
 namespace LunarShadow.Api.Photography;
 
@@ -45,6 +47,23 @@ internal static class PhotoWarningText
             _ => Code(w.Code),
         };
     }
+
+    /// <summary>A run note in one English sentence, naming the local clock times of its first and last rows.</summary>
+    public static string NoteSentence(PlanNote note, DateTimeZone zone)
+    {
+        double N(string name) => note.Numbers.TryGetValue(name, out var v) ? v : 0;
+        var span = note.Rows == 1
+            ? $"At {SiteWording.Clock(note.FromUtc, zone)}"
+            : $"From {SiteWording.Clock(note.FromUtc, zone)} to {SiteWording.Clock(note.ToUtc, zone)} ({note.Rows} rows)";
+        return note.Code switch
+        {
+            PhotoWarningCode.IsoChanged => F($"{span}: ISO {(N("lowestIso") > N("fromIso") ? "raised" : "lowered")} from {N("fromIso"):0} to {IsoRange(N("lowestIso"), N("highestIso"))} to keep the shutter in the camera's range."),
+            _ => F($"{span}: {Code(note.Code)}."),
+        };
+    }
+
+    private static string IsoRange(double lowest, double highest) =>
+        Math.Round(lowest) == Math.Round(highest) ? F($"{lowest:0}") : F($"{lowest:0}–{highest:0}");
 
     private static string Shutter(double seconds) => seconds >= 1 || seconds <= 0
         ? F($"{seconds:0.#} s")

@@ -51,6 +51,7 @@ public sealed record TimelineRow(
 /// <param name="Sequences">Multi-exposure and time-lapse plans (null when nothing is visible).</param>
 /// <param name="UncertaintyStops">How far the brightness estimate may be off in totality, stops.</param>
 /// <param name="Cautions">Safety notes.</param>
+/// <param name="Notes">Notes that hold for a run of rows (an ISO change), given once per run rather than on each row.</param>
 public sealed record PhotoPlan(
     LocalCircumstances Local, Camera Camera, PhotoSettings Settings, double ExtinctionPerAirMass, IReadOnlyList<TimelineRow> Timeline,
-    Framing Framing, Sequences? Sequences, double UncertaintyStops, IReadOnlyList<string> Cautions);
+    Framing Framing, Sequences? Sequences, double UncertaintyStops, IReadOnlyList<string> Cautions, IReadOnlyList<PlanNote> Notes);

@@ -13,9 +13,14 @@ public static class PhotoPlanner
     private const double LowAltitudeDegrees = 10;
 
     /// <summary>The plan.</summary>
-    public static PhotoPlan Plan(LunarEclipse eclipse, Site site, Camera camera, PhotoSettings settings, TimeScaleConverter time)
+    public static PhotoPlan Plan(LunarEclipse eclipse, Site site, Camera camera, PhotoSettings settings, TimeScaleConverter time) =>
+        Plan(LocalCircumstancesCalculator.Compute(eclipse, site, time), camera, settings, time);
+
+    /// <summary>The plan for local circumstances already computed (several cameras at one site share them).</summary>
+    public static PhotoPlan Plan(LocalCircumstances local, Camera camera, PhotoSettings settings, TimeScaleConverter time)
     {
-        var local = LocalCircumstancesCalculator.Compute(eclipse, site, time);
+        var eclipse = local.Eclipse;
+        var site = local.Site;
         var sky = new LocalSky(eclipse.NightSky, site, local.DeltaTSeconds);
         var night = eclipse.NightSky;
         var passage = eclipse.Passage;
@@ -29,7 +34,8 @@ public static class PhotoPlanner
         foreach (var (tt, label) in RowInstants(local, settings.IntervalMinutes))
             rows.Add(Row(tt, label));
         var sequences = visible.Count == 0 ? null : Sequence(sky, night, camera, settings, visible);
-        return new PhotoPlan(local, camera, settings, k, rows, framing, sequences, UmbralGlow.UncertaintyStops, Cautions(local));
+        var (timeline, notes) = PlanNotes.Group(rows);
+        return new PhotoPlan(local, camera, settings, k, timeline, framing, sequences, UmbralGlow.UncertaintyStops, Cautions(local), notes);
 
         TimelineRow Row(TtInstant tt, string? label)
         {

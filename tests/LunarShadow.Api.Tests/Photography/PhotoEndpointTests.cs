@@ -44,6 +44,47 @@ public class PhotoEndpointTests(ApiFactory factory) : IClassFixture<ApiFactory>
         Assert.True(steps[0].TryGetProperty("instant", out _) && steps[0].TryGetProperty("shutterSeconds", out _));
     }
 
+    // Common practice (a note is read once): ISO 100 at f/8 on a Moon-tracking mount needs more than 30 s in totality, so
+    // the ISO is raised; JSON gives that once per run with its local time range, the CSV writes it once in the warnings
+    // column of the run's first row, and the camera sequence once on that row's first step.
+    [Fact]
+    public async Task An_ISO_change_is_written_once_per_run_in_JSON_CSV_and_the_sequence()
+    {
+        const string query = Plan + "&iso=100&aperture=8&focalLength=400&mount=lunar&bracket=1";
+        var p = await JsonAssert.OkJson(await _client.GetAsync(query));
+        var notes = p.GetProperty("notes").EnumerateArray().ToList();
+        Assert.NotEmpty(notes);
+        Assert.All(notes, n => Assert.Equal("iso-changed", n.GetProperty("code").GetString()));
+        var rows = p.GetProperty("timeline").EnumerateArray().ToList();
+        Assert.DoesNotContain(rows, r => r.GetProperty("warningDetails").EnumerateArray().Any(w => w.GetProperty("code").GetString() == "iso-changed"));
+        var first = notes[0];
+        var firstRow = first.GetProperty("firstRow").GetInt32();
+        var rowCount = first.GetProperty("rows").GetInt32();
+        Assert.True(rowCount > 1);
+        Assert.Equal(rows[firstRow].GetProperty("utc").GetString(), first.GetProperty("fromUtc").GetString());
+        Assert.Equal(rows[firstRow + rowCount - 1].GetProperty("utc").GetString(), first.GetProperty("toUtc").GetString());
+        var text = first.GetProperty("text").GetString()!;
+        Assert.StartsWith("From ", text, StringComparison.Ordinal);
+        Assert.Contains("ISO raised from 100", text, StringComparison.Ordinal);
+
+        var csv = await (await _client.GetAsync(query + "&format=csv")).Content.ReadAsStringAsync();
+        Assert.Equal(notes.Count, CountOf(csv, "ISO raised from"));
+        Assert.Equal(1, CountOf(csv, text));
+
+        var steps = JsonDocument.Parse(await (await _client.GetAsync(query + "&format=sequence")).Content.ReadAsStringAsync()).RootElement.EnumerateArray().ToList();
+        var noted = steps.Where(s => s.TryGetProperty("note", out var n) && n.ValueKind == JsonValueKind.String).ToList();
+        Assert.Equal(notes.Count, noted.Count);
+        Assert.Equal(first.GetProperty("fromUtc").GetString(), noted[0].GetProperty("instant").GetString());
+        Assert.Equal(text, noted[0].GetProperty("note").GetString());
+    }
+
+    private static int CountOf(string haystack, string needle)
+    {
+        var count = 0;
+        for (var i = haystack.IndexOf(needle, StringComparison.Ordinal); i >= 0; i = haystack.IndexOf(needle, i + needle.Length, StringComparison.Ordinal)) count++;
+        return count;
+    }
+
     [Fact]
     public async Task A_camera_profile_can_come_in_a_JSON_body()
     {

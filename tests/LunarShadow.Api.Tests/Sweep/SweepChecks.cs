@@ -119,6 +119,22 @@ internal static class SweepChecks
             ShutterInRange(row.Exposure.ShutterSeconds, plan.Camera, "wire shutter");
             foreach (var t in row.Exposure.BracketShutterSeconds) ShutterInRange(t, plan.Camera, "wire bracket");
         }
+        // A run note is given once: no row repeats it, runs lie inside the timeline, and two runs of one code never touch.
+        Require(plan.Timeline.All(r => r.Warnings.All(w => !PlanNotes.GroupedCodes.Contains(w.Code))), "a row repeats a run note");
+        PlanNote? previous = null;
+        foreach (var note in plan.Notes)
+        {
+            Require(note.Rows >= 1 && note.FirstRow >= 0 && note.FirstRow + note.Rows <= plan.Timeline.Count, "run note outside the timeline");
+            Require(note.Numbers.Values.All(double.IsFinite), "non-finite run-note number");
+            if (previous is not null && previous.Code == note.Code)
+                Require(note.FirstRow > previous.FirstRow + previous.Rows, "two runs of one note touch");
+            previous = note;
+        }
+        foreach (var note in response.Notes)
+        {
+            LocalIsUtcPlusOffset(note.FromUtc, note.FromLocal, local.Site.TimeZone);
+            LocalIsUtcPlusOffset(note.ToUtc, note.ToLocal, local.Site.TimeZone);
+        }
     }
 
     /// <summary>The camera-control sequence: every step's shutter settable.</summary>

@@ -153,6 +153,8 @@ function warnings(p) {
     const span = times.length > 1 ? `${times[0]}–${times[times.length - 1]}` : times[0];
     ul.appendChild(Object.assign(document.createElement('li'), { textContent: `${span}: ${text}` }));
   }
+  // Notes for a run of rows (an ISO change) come once each, already naming their time range.
+  for (const n of p.notes ?? []) ul.appendChild(Object.assign(document.createElement('li'), { textContent: n.text }));
   for (const c of p.cautions) ul.appendChild(Object.assign(document.createElement('li'), { textContent: c }));
   if (!ul.children.length) ul.appendChild(Object.assign(document.createElement('li'), { textContent: 'No warnings for this set-up.' }));
 }

@@ -2,15 +2,31 @@ namespace LunarShadow.Astronomy.Time;
 
 /// <summary>
 /// The ΔT polynomials of Espenak &amp; Meeus (2006), as used by the Five Millennium Canon of Lunar Eclipses
-/// (Espenak &amp; Meeus 2009), with the canon's correction for the lunar secular acceleration.
+/// (Espenak &amp; Meeus 2009), with the canon's correction for the lunar secular acceleration. Beyond its last data
+/// (2005) the uncertainty is that of a trend forecast in hindcasts on the measured record.
 /// </summary>
 public sealed class EspenakMeeus2006DeltaT : IDeltaTModel
 {
     /// <summary>The public name of this model.</summary>
     public const string ModelName = "espenak-meeus-2006";
 
+    /// <summary>The last year of data behind the polynomials; later values are forecasts.</summary>
+    public const double LastDataYear = 2005;
+
+    // Years of record behind the trend forecast's rate (the span Espenak & Meeus fitted, 2000–2005).
+    private const double TrendYears = 5;
+
+    // Morrison & Stephenson (2004): the long-term parabola ΔT = −20 + 32·u² s, u in centuries, curves by 32 s/cy² = 0.0032 s/yr².
+    private const double ParabolaCurvatureSecondsPerYearSquared = 0.0032;
+
+    private static readonly Lazy<DeltaTForecastUncertainty> Forecast = new(() => DeltaTHindcast.FitPowerLaw(
+        DeltaTHindcast.Run(MeasuredDeltaTSeries.WholeRecord, TrendForecast, MeasuredDeltaTSeries.WholeRecord.FirstYear + TrendYears)));
+
     /// <inheritdoc />
     public string Name => ModelName;
+
+    /// <summary>σ of this model's forecast N years beyond <see cref="LastDataYear"/>, from hindcasts on the measured record.</summary>
+    public static DeltaTForecastUncertainty ForecastUncertainty => Forecast.Value;
 
     /// <inheritdoc />
     public DeltaT At(double decimalYear) =>
@@ -74,9 +90,27 @@ public sealed class EspenakMeeus2006DeltaT : IDeltaTModel
     // for the lunar ephemeris's secular acceleration (−25.858″/cy²) against the −26″/cy² behind the polynomials.
     internal static double LunarAccelerationCorrection(double y) => -0.000012932 * (y - 1955) * (y - 1955);
 
+    // Espenak & Meeus (2006) continue the recent trend and bend onto the long-term parabola; as a reproducible stand-in
+    // for hindcasts: the record's value at the start year, its mean rate over the five years before, and the parabola's curvature.
+    internal static double TrendForecast(MeasuredDeltaTSeries record, double startYear, double targetYear)
+    {
+        var now = record.At(startYear);
+        var rate = (now - record.At(startYear - TrendYears)) / TrendYears;
+        var n = targetYear - startYear;
+        return now + rate * n + ParabolaCurvatureSecondsPerYearSquared * n * n;
+    }
+
     // Morrison & Stephenson (2004), J. Hist. Astron. 35, 327: standard error ≈ 0.8·t² s, t in centuries from 1820
-    // (from memory); never less than 0.1 s.
+    // (from memory); never less than 0.1 s. After the last data, that of 2005 and the hindcast σ in quadrature.
     internal static double Uncertainty(double y)
+    {
+        var past = PastUncertainty(Math.Min(y, LastDataYear));
+        if (y <= LastDataYear) return past;
+        var forecast = Forecast.Value.SecondsAfter(y - LastDataYear);
+        return Math.Sqrt(past * past + forecast * forecast);
+    }
+
+    private static double PastUncertainty(double y)
     {
         var t = (y - 1820) / 100;
         return Math.Max(0.8 * t * t, 0.1);

@@ -3,8 +3,9 @@ using LunarShadow.Astronomy.Embedded;
 namespace LunarShadow.Astronomy.Time;
 
 /// <summary>
-/// Measured ΔT: USNO half-yearly values from 1955 (the atomic-clock era) and the USNO/IERS monthly series
-/// from 1973, as imported from the astronomia@4.2.0 package by tools/ephemeris-import.
+/// Measured ΔT: USNO half-yearly values (from 1657 in the whole record, from 1955, the atomic-clock era, in the series
+/// the models use) and the USNO/IERS monthly series from 1973, as imported from the astronomia@4.2.0 package by
+/// tools/ephemeris-import.
 /// </summary>
 internal sealed class MeasuredDeltaTSeries
 {
@@ -17,8 +18,14 @@ internal sealed class MeasuredDeltaTSeries
         _seconds = seconds;
     }
 
-    /// <summary>The series embedded in this build.</summary>
-    public static MeasuredDeltaTSeries Embedded { get; } = Load();
+    // Start of the atomic-clock era, where the models take over the measurements.
+    private const double AtomicEraStartYear = 1955.0;
+
+    /// <summary>The series embedded in this build, from the atomic-clock era (1955) on.</summary>
+    public static MeasuredDeltaTSeries Embedded { get; } = Load(AtomicEraStartYear);
+
+    /// <summary>The whole embedded record, from the first telescopic half-yearly value (1657) on: the hindcasts' record.</summary>
+    public static MeasuredDeltaTSeries WholeRecord { get; } = Load(double.NegativeInfinity);
 
     /// <summary>First year of the series.</summary>
     public double FirstYear => _years[0];
@@ -40,13 +47,13 @@ internal sealed class MeasuredDeltaTSeries
         return _seconds[i - 1] + f * (_seconds[i] - _seconds[i - 1]);
     }
 
-    private static MeasuredDeltaTSeries Load()
+    private static MeasuredDeltaTSeries Load(double firstHalfYear)
     {
         var file = BlockFile.FromResource(EmbeddedDataSet.MeasuredDeltaT);
         var monthly = file["MONTHLY_MJD"].Select(r => (Year: new JulianDate(r[0] + 2400000.5).DecimalYear, Seconds: r[1])).ToList();
         var firstMonthly = monthly[0].Year;
         var halfYearly = file["HALFYEAR_YEAR"]
-            .Where(r => r[0] >= 1955.0 && r[0] < firstMonthly)
+            .Where(r => r[0] >= firstHalfYear && r[0] < firstMonthly)
             .Select(r => (Year: r[0], Seconds: r[1]));
         var all = halfYearly.Concat(monthly).ToArray();
         return new MeasuredDeltaTSeries(all.Select(p => p.Year).ToArray(), all.Select(p => p.Seconds).ToArray());
