@@ -72,6 +72,8 @@ public class CraterTests(BrowserFixture fixture)
             Assert.True(small.Length == 0, string.Join("; ", small.Take(10)));
             Assert.True(await s.Page.EvaluateAsync<bool>("document.documentElement.scrollWidth <= window.innerWidth"), "the page scrolls sideways");
         }
+        // The table fits its panel: no column hidden behind a sideways scroll.
+        Assert.True(await s.Page.EvaluateAsync<bool>("(() => { const w = document.querySelector('#crater-table').parentElement; return w.scrollWidth <= w.clientWidth + 1; })()"), "the crater table scrolls sideways");
         Assert.Empty(s.Errors);
         await s.ScreenshotAsync($"craters-{width}", "#craters");
         await s.ScreenshotAsync($"shadow-features-{width}", "#shadow-diagram");

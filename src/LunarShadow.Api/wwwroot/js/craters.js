@@ -30,7 +30,7 @@ function drawDisc(svg, features) {
   const W = Math.min(widthOf(svg, 320), 420);
   const H = W;
   reset(svg, 'Lunar features timed at this eclipse', W, H);
-  const c = W / 2, R = W / 2 - 34;
+  const c = W / 2, R = W / 2 - 46;
   svg.appendChild(el('circle', { cx: c, cy: c, r: R, class: 'crater-disc' }));
   const shown = [];
   for (const f of features) {
@@ -59,7 +59,8 @@ export function placeLabels(svg, items, frame, obstacles, [cx, cy]) {
     const width = textWidth(text);
     const d = Math.hypot(x - cx, y - cy) || 1;
     const [ux, uy] = [(x - cx) / d, (y - cy) / d];
-    const near = [[width / 2 + 6, 4], [-width / 2 - 6, 4], [0, -8], [0, 16]];
+    const near = [[width / 2 + 6, 4], [-width / 2 - 6, 4], [0, -8], [0, 16],
+      [width / 2, -9], [-width / 2, -9], [width / 2, 17], [-width / 2, 17], [0, -22], [0, 30]];
     const out = [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12].map((k) => [ux * 18 * k + (ux >= 0 ? width / 2 : -width / 2), uy * 18 * k + 4]);
     return { x, y, width, candidates: [...near, ...out] };
   });
