@@ -298,6 +298,23 @@ public class PageTests(BrowserFixture fixture)
         await s.ScreenshotAsync("photo-1400", "#photo");
     }
 
+    [SkippableFact]
+    public async Task A_bad_camera_value_is_shown_as_an_error_in_the_photographers_view()
+    {
+        Chromium.RequireOrSkip();
+        await using var s = await Open("/?lat=47.31&lon=11.42&elevation=1120&tz=Europe/Vienna&date=2029-12-20", 390);
+        await s.Page.WaitForSelectorAsync("#photo:not([hidden])");
+        await s.Page.FillAsync("#focal", "0");
+        await s.Page.ClickAsync("#plan-photo");
+        await s.Page.WaitForSelectorAsync("#photo-error:not([hidden])");
+        Assert.Contains("focalLength", await s.Page.InnerTextAsync("#photo-error"), StringComparison.Ordinal);
+        Assert.False(await s.Page.IsVisibleAsync("#photo-result"));
+        var low = await s.Page.EvaluateAsync<string[]>(PageScripts.LowContrast, 4.5);
+        Assert.True(low.Length == 0, string.Join("; ", low.Take(10)));
+        Assert.Empty(s.Errors);
+        await s.ScreenshotAsync("error-photo-focal-390", "#photo");
+    }
+
     [SkippableTheory]
     [InlineData(1400)]
     [InlineData(390)]
