@@ -74,13 +74,26 @@ public partial class EmbedTests(BrowserFixture fixture)
         await card.ScreenshotAsync("embed-no-parameters");
     }
 
-    [SkippableFact]
-    public async Task The_main_page_text_passes_AA_contrast()
+    // The main page has one theme (dark); the only theme switch on it is the embed snippet's, checked above for both
+    // of the card's themes. Here: the page with every section drawn, and the error panel, at both widths.
+    [SkippableTheory]
+    [InlineData(1400)]
+    [InlineData(390)]
+    public async Task The_main_page_text_passes_AA_contrast(int width)
     {
         Chromium.RequireOrSkip();
-        await using var page = await PageSession.OpenAsync(fixture, "/", 1400);
-        await page.Page.WaitForFunctionAsync("document.querySelectorAll('#timeline-chart .hour-tick').length > 0");
+        await using var page = await PageSession.OpenAsync(fixture, "/", width);
+        await page.Page.WaitForFunctionAsync("document.querySelectorAll('#timeline-chart .hour-tick').length > 0 && document.querySelectorAll('#crater-table tbody tr').length > 40 && document.querySelector('#shadow-diagram .feature-label')");
         var low = await page.Page.EvaluateAsync<string[]>(PageScripts.LowContrast, 4.5);
         Assert.True(low.Length == 0, string.Join("; ", low.Take(10)));
+        await page.ScreenshotAsync($"contrast-page-{width}");
+
+        await using var error = await PageSession.OpenAsync(fixture, "/?lat=123&lon=11.42&tz=Europe/Vienna&date=2029-12-20", width);
+        await error.Page.WaitForSelectorAsync("#error:not([hidden])");
+        var lowError = await error.Page.EvaluateAsync<string[]>(PageScripts.LowContrast, 4.5);
+        Assert.True(lowError.Length == 0, string.Join("; ", lowError.Take(10)));
+        Assert.Empty(page.Errors);
+        Assert.Empty(error.Errors);
+        await error.ScreenshotAsync($"contrast-error-{width}");
     }
 }

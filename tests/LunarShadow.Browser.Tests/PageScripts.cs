@@ -75,4 +75,27 @@ internal static class PageScripts
           return bad;
         }
         """;
+
+    /// <summary>
+    /// Segments of the world map's paths that jump more than half the map across (a ring crossing ±180° drawn straight
+    /// across the map); the closing edges along the poles (top and bottom rows) are allowed.
+    /// </summary>
+    public const string MapJumps = """
+        () => {
+          const svg = document.querySelector('#world-map');
+          const W = +svg.getAttribute('width'), H = +svg.getAttribute('height');
+          const bad = [];
+          for (const p of svg.querySelectorAll('path')) {
+            for (const sub of (p.getAttribute('d') || '').split('M').filter(Boolean)) {
+              const pts = sub.replace(/Z/g, '').split('L').map((t) => t.split(',').map(Number));
+              for (let i = 1; i < pts.length; i++) {
+                const [x0, y0] = pts[i - 1], [x1, y1] = pts[i];
+                const alongPole = (y0 <= 1 && y1 <= 1) || (y0 >= H - 1 && y1 >= H - 1);
+                if (Math.abs(x1 - x0) > W / 2 && !alongPole) bad.push(`${p.getAttribute('class')}: ${x0},${y0} to ${x1},${y1}`);
+              }
+            }
+          }
+          return bad;
+        }
+        """;
 }

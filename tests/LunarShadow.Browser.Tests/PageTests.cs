@@ -103,7 +103,8 @@ public class PageTests(BrowserFixture fixture)
 
     private static async Task AssertNoLabelOverlapsAsync(PageSession s, int width, string date)
     {
-        await s.Page.WaitForFunctionAsync("document.querySelector('#shadow-diagram .moon-disc') && document.querySelector('#world-map .land')");
+        // The shadow diagram is complete once the crater timings have put the features on it.
+        await s.Page.WaitForFunctionAsync("document.querySelector('#shadow-diagram .feature-dot') && document.querySelector('#world-map .land')");
         foreach (var chart in new[] { "#timeline-chart", "#shadow-diagram", "#world-map" })
         {
             var problems = await s.Page.EvaluateAsync<string[]>(PageScripts.OverlappingLabels, chart);
@@ -190,11 +191,13 @@ public class PageTests(BrowserFixture fixture)
             ("bad-horizon", "#horizon", "90:95", "horizon"),
             ("bad-opening-hours", "#open", "25:00-26:00", "open"),
             ("malformed-date", "#eclipse-date", "2029-13-45", "date"),
+            ("bad-height", "#elevation", "99999", "elevation"),
+            ("missing-latitude", "#lat", "", "lat"),
         };
         foreach (var (name, input, value, field) in cases)
         {
             // Start from a good request each time, then spoil one field.
-            foreach (var (id, good) in new[] { ("#lat", "47.31"), ("#lon", "11.42"), ("#tz", "Europe/Vienna"), ("#horizon", ""), ("#open", ""), ("#eclipse-date", "2029-12-20") })
+            foreach (var (id, good) in new[] { ("#lat", "47.31"), ("#lon", "11.42"), ("#elevation", "1120"), ("#tz", "Europe/Vienna"), ("#horizon", ""), ("#open", ""), ("#eclipse-date", "2029-12-20") })
                 await s.Page.FillAsync(id, good);
             await s.Page.ClickAsync("#show");
             await s.Page.WaitForSelectorAsync("#result:not([hidden])");
@@ -293,5 +296,71 @@ public class PageTests(BrowserFixture fixture)
         Assert.True(problems.Length == 0, string.Join("; ", problems));
         Assert.Empty(s.Errors);
         await s.ScreenshotAsync("photo-1400", "#photo");
+    }
+
+    [SkippableFact]
+    public async Task A_bad_camera_value_is_shown_as_an_error_in_the_photographers_view()
+    {
+        Chromium.RequireOrSkip();
+        await using var s = await Open("/?lat=47.31&lon=11.42&elevation=1120&tz=Europe/Vienna&date=2029-12-20", 390);
+        await s.Page.WaitForSelectorAsync("#photo:not([hidden])");
+        await s.Page.FillAsync("#focal", "0");
+        await s.Page.ClickAsync("#plan-photo");
+        await s.Page.WaitForSelectorAsync("#photo-error:not([hidden])");
+        Assert.Contains("focalLength", await s.Page.InnerTextAsync("#photo-error"), StringComparison.Ordinal);
+        Assert.False(await s.Page.IsVisibleAsync("#photo-result"));
+        var low = await s.Page.EvaluateAsync<string[]>(PageScripts.LowContrast, 4.5);
+        Assert.True(low.Length == 0, string.Join("; ", low.Take(10)));
+        Assert.Empty(s.Errors);
+        await s.ScreenshotAsync("error-photo-focal-390", "#photo");
+    }
+
+    [SkippableTheory]
+    [InlineData(1400)]
+    [InlineData(390)]
+    public async Task The_photographers_view_plans_a_total_eclipse(int width)
+    {
+        Chromium.RequireOrSkip();
+        // The page's example: a total eclipse (54 min of totality) the Hollowmere Hill site sees whole.
+        await using var s = await Open("/?lat=47.31&lon=11.42&elevation=1120&tz=Europe/Vienna&date=2029-12-20", width);
+        await s.Page.WaitForSelectorAsync("#photo:not([hidden])");
+        await s.Page.SelectOptionAsync("#mount", "lunar");
+        await s.Page.ClickAsync("#plan-photo");
+        await s.Page.WaitForFunctionAsync("document.querySelector('#framing').textContent.includes('400 mm') && document.querySelector('#exposure-chart polyline.exposure-line')");
+        Assert.Equal(1, await s.Page.Locator("#exposure-chart polygon.bracket-band").CountAsync());
+        Assert.True(await s.Page.Locator("#exposure-chart .hour-tick").CountAsync() >= 3);
+        // The total phase is drawn behind the curve.
+        Assert.True(await s.Page.Locator("#exposure-chart rect.band-total").CountAsync() >= 1);
+        var problems = await s.Page.EvaluateAsync<string[]>(PageScripts.OverlappingLabels, "#exposure-chart");
+        Assert.True(problems.Length == 0, string.Join("; ", problems));
+        if (width < 500)
+        {
+            var small = await s.Page.EvaluateAsync<string[]>(PageScripts.SmallTexts, 11);
+            Assert.True(small.Length == 0, string.Join("; ", small.Take(10)));
+            Assert.True(await s.Page.EvaluateAsync<bool>("document.documentElement.scrollWidth <= window.innerWidth"), "the page scrolls sideways");
+        }
+        Assert.Equal(3, await s.Page.Locator("#photo-downloads a").CountAsync());
+        Assert.Empty(s.Errors);
+        await s.ScreenshotAsync($"photo-total-{width}", "#photo");
+    }
+
+    [SkippableTheory]
+    [InlineData(1400)]
+    [InlineData(390)]
+    public async Task Near_the_antimeridian_no_outline_crosses_the_map_and_the_site_stays_in_the_frame(int width)
+    {
+        Chromium.RequireOrSkip();
+        // An invented island station at 17.8 S 178.0 E; the total eclipse of 2026-03-03 is seen all over the Pacific, so
+        // its visibility outlines and several coastlines cross ±180°.
+        await using var s = await Open("/?lat=-17.8&lon=178.0&elevation=10&tz=Pacific/Fiji&date=2026-03-03", width);
+        await s.Page.WaitForFunctionAsync(ContactsDrawn + " && document.querySelector('#world-map .outline-eclipse')");
+        var jumps = await s.Page.EvaluateAsync<string[]>(PageScripts.MapJumps);
+        Assert.True(jumps.Length == 0, string.Join("; ", jumps.Take(10)));
+        Assert.True(await s.Page.EvaluateAsync<bool>("""
+            (() => { const m = document.querySelector('#world-map .site').getBoundingClientRect(), f = document.querySelector('#world-map').getBoundingClientRect();
+              return m.left >= f.left && m.right <= f.right && m.top >= f.top && m.bottom <= f.bottom && Math.abs((m.left + m.right) / 2 - (f.left + f.right) / 2) < 2; })()
+            """));
+        Assert.Empty(s.Errors);
+        await s.ScreenshotAsync($"antimeridian-map-{width}", "#world-map");
     }
 }

@@ -45,6 +45,7 @@ public sealed record CraterSiteResponse(string? Name, double LatitudeDegrees, do
 /// <param name="Emersion">It leaves the umbra (null when never).</param>
 /// <param name="PenumbralImmersion">The penumbra's outer edge reaches it (only with penumbra=true).</param>
 /// <param name="PenumbralEmersion">It leaves the penumbra (only with penumbra=true).</param>
+/// <param name="AtGreatest">Where the feature lies relative to the shadow axis at greatest eclipse, in the frame of the eclipse's shadow diagram.</param>
 public sealed record CraterTimingResponse(
     string Name,
     double LatitudeDegrees,
@@ -53,7 +54,14 @@ public sealed record CraterTimingResponse(
     CrossingResponse? Immersion,
     CrossingResponse? Emersion,
     CrossingResponse? PenumbralImmersion = null,
-    CrossingResponse? PenumbralEmersion = null);
+    CrossingResponse? PenumbralEmersion = null,
+    AxisOffsetResponse? AtGreatest = null);
+
+/// <summary>A feature's place relative to the shadow axis at one instant, as the shadow diagram draws the Moon's centre.</summary>
+/// <param name="EastDegrees">Angle east of the shadow axis, degrees (gnomonic, geocentric).</param>
+/// <param name="NorthDegrees">Angle north of the shadow axis, degrees.</param>
+/// <param name="FacesEarth">Whether the feature is on the hemisphere turned to the Earth at that instant.</param>
+public sealed record AxisOffsetResponse(double EastDegrees, double NorthDegrees, bool FacesEarth);
 
 /// <summary>One crossing of a shadow's edge over a feature.</summary>
 /// <param name="Utc">UTC, ISO 8601.</param>

@@ -58,8 +58,9 @@ internal static class CraterEndpoints
         var time = query.Time;
 
         var list = chosen ?? LunarFeatureCatalog.All;
-        var timings = new FeatureShadowCrossings(eclipse).Compute(list);
-        var response = CraterMapping.ToResponse(eclipse, timings, time, site, withPenumbra) with { MeasuredShadow = measured };
+        var crossings = new FeatureShadowCrossings(eclipse);
+        var timings = crossings.Compute(list);
+        var response = CraterMapping.ToResponse(crossings, timings, time, site, withPenumbra) with { MeasuredShadow = measured };
         switch (output)
         {
             case OutputFormat.Csv:

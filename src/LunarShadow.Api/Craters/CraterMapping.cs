@@ -11,8 +11,9 @@ namespace LunarShadow.Api.Craters;
 /// <summary>Turns feature crossings into the response contract, adding what a site sees of each crossing.</summary>
 internal static class CraterMapping
 {
-    public static CraterTimingsResponse ToResponse(LunarEclipse eclipse, IReadOnlyList<FeatureTiming> timings, TimeScaleConverter time, Site? site, bool penumbra)
+    public static CraterTimingsResponse ToResponse(FeatureShadowCrossings crossings, IReadOnlyList<FeatureTiming> timings, TimeScaleConverter time, Site? site, bool penumbra)
     {
+        var eclipse = crossings.Eclipse;
         var deltaT = time.DeltaTAt(eclipse.GreatestEclipse);
         var toUtc = NightClock.For(eclipse, time);
         var uncertainty = TimeFormats.Round(deltaT.UncertaintySeconds, 1);
@@ -43,12 +44,19 @@ internal static class CraterMapping
             };
         }
 
+        AxisOffsetResponse AtGreatest(LunarFeature feature)
+        {
+            var (east, north, facesEarth) = crossings.OffsetFromAxisAt(feature, eclipse.GreatestEclipse);
+            return new AxisOffsetResponse(TimeFormats.Round(east.Degrees, 5), TimeFormats.Round(north.Degrees, 5), facesEarth);
+        }
+
         var ordered = timings.Where(t => t.ReachedByUmbra).OrderBy(t => t.UmbraImmersion!.Tt)
             .Concat(timings.Where(t => !t.ReachedByUmbra))
             .Select(t => new CraterTimingResponse(t.Feature.Name,
                 TimeFormats.Round(t.Feature.Location.Latitude.Degrees, 2), TimeFormats.Round(t.Feature.Location.Longitude.Degrees, 2),
                 t.ReachedByUmbra, Crossing(t.UmbraImmersion), Crossing(t.UmbraEmersion),
-                penumbra ? Crossing(t.PenumbraImmersion) : null, penumbra ? Crossing(t.PenumbraEmersion) : null))
+                penumbra ? Crossing(t.PenumbraImmersion) : null, penumbra ? Crossing(t.PenumbraEmersion) : null,
+                AtGreatest(t.Feature)))
             .ToList();
 
         return new CraterTimingsResponse(

@@ -1,6 +1,7 @@
 using LunarShadow.Astronomy.Frames;
 using LunarShadow.Astronomy.Numerics;
 using LunarShadow.Astronomy.Shadow;
+using LunarShadow.Astronomy.Time;
 using LunarShadow.Astronomy.Units;
 
 namespace LunarShadow.Astronomy.Eclipses;
@@ -65,6 +66,16 @@ public sealed class FeatureShadowCrossings
     /// its position angle on the disc seen from the Earth's centre, and whether it faces the Earth.
     /// </returns>
     public (ShadowGeometry Geometry, Angle PositionAngle, bool FacesEarth) At(LunarFeature feature, double hours) => At(feature, FrameAt(hours));
+
+    /// <summary>
+    /// Where a feature lies relative to the shadow axis at an instant within the passage: east and north of the axis in
+    /// the same gnomonic frame as <see cref="ShadowDiagram"/>, so it can be drawn on the diagram's Moon.
+    /// </summary>
+    public (Angle East, Angle North, bool FacesEarth) OffsetFromAxisAt(LunarFeature feature, TtInstant tt)
+    {
+        var (geometry, _, facesEarth) = At(feature, _eclipse.Passage.HoursFromCenter(tt));
+        return (geometry.EastOfAxis, geometry.NorthOfAxis, facesEarth);
+    }
 
     /// <summary>How far a feature lies outside a shadow's edge (negative inside), radians, at some hours from the centre.</summary>
     public double DistanceOutside(LunarFeature feature, double hours, bool umbra) => DistanceOutside(feature, FrameAt(hours), umbra);

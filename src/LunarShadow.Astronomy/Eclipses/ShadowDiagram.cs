@@ -20,7 +20,7 @@ public sealed record ShadowDiagram(Angle UmbraRadius, Angle PenumbraRadius, Angl
         {
             // ξ and η are the gnomonic coordinates (tangents) of the Moon's direction about the axis.
             var g = eclipse.Passage.At(eclipse.Passage.HoursFromCenter(m.Tt));
-            return new ShadowDiagramPoint(m, Angle.FromRadians(Math.Atan(g.XiRadians)), Angle.FromRadians(Math.Atan(g.EtaRadians)));
+            return new ShadowDiagramPoint(m, g.EastOfAxis, g.NorthOfAxis);
         }).ToList();
         return new ShadowDiagram(eclipse.RadiiAtGreatest.Umbra, eclipse.RadiiAtGreatest.Penumbra, eclipse.MoonAtGreatest.SemiDiameter, points);
     }

@@ -20,6 +20,12 @@ public readonly record struct ShadowGeometry(
     double SunDistanceKm,
     double AxisDeclinationRadians)
 {
+    /// <summary>Angle east of the shadow axis (ξ is its tangent), as a diagram of the shadow draws it.</summary>
+    public Angle EastOfAxis => Angle.FromRadians(Math.Atan(XiRadians));
+
+    /// <summary>Angle north of the shadow axis (η is its tangent).</summary>
+    public Angle NorthOfAxis => Angle.FromRadians(Math.Atan(EtaRadians));
+
     /// <summary>Angular distance of the Moon's centre from the shadow axis.</summary>
     public Angle Separation => Angle.FromRadians(Math.Atan(Math.Sqrt(XiRadians * XiRadians + EtaRadians * EtaRadians)));
 

@@ -43,6 +43,28 @@ public class CraterEndpointTests(UnthrottledApiFactory factory, ITestOutputHelpe
         Assert.All(reached, f => Assert.True(f.GetProperty("immersion").GetProperty("uncertaintySeconds").GetDouble() > 0));
     }
 
+    // Common practice (geometry): a feature on the Earth-facing hemisphere is seen within the Moon's disc, at most one
+    // semi-diameter from its centre; a feature near the centre of the map (Mösting A, 3° S 5° W) lies near the disc's
+    // centre (libration is under 10°). Checked against the eclipse endpoint's own shadow diagram, a separate mapping.
+    [Fact]
+    public async Task Each_feature_at_greatest_lies_on_the_Moon_the_shadow_diagram_draws_at_greatest()
+    {
+        var craters = await Get("2029-12-20/craters");
+        var eclipse = await Get("2029-12-20");
+        var diagram = eclipse.GetProperty("shadowDiagram");
+        var greatest = diagram.GetProperty("points").EnumerateArray().Single(p => p.GetProperty("name").GetString() == "greatest");
+        var radius = diagram.GetProperty("moonRadiusDegrees").GetDouble();
+        double Distance(JsonElement at) => Math.Sqrt(
+            Math.Pow(at.GetProperty("eastDegrees").GetDouble() - greatest.GetProperty("eastDegrees").GetDouble(), 2)
+            + Math.Pow(at.GetProperty("northDegrees").GetDouble() - greatest.GetProperty("northDegrees").GetDouble(), 2));
+        var offsets = craters.GetProperty("features").EnumerateArray().ToDictionary(f => f.GetProperty("name").GetString()!, f => f.GetProperty("atGreatest"));
+        foreach (var (name, at) in offsets.Where(o => o.Value.GetProperty("facesEarth").GetBoolean()))
+            Assert.True(Distance(at) <= radius * 1.002, $"{name}: {Distance(at) / radius:0.000} semi-diameters from the centre");
+        Assert.True(offsets.Values.Max(Distance) > 0.85 * radius, "the limb features lie near the limb");
+        Assert.True(Distance(offsets["Mösting A"]) < 0.2 * radius);
+        output.WriteLine($"largest {offsets.Values.Max(Distance) / radius:0.000}, Mösting A {Distance(offsets["Mösting A"]) / radius:0.000} semi-diameters");
+    }
+
     // Common practice (geometry): in a penumbral eclipse the umbra reaches nothing, but every feature is still listed.
     [Fact]
     public async Task A_penumbral_eclipse_lists_every_feature_as_never_reached()

@@ -5,6 +5,7 @@ import { drawShadow } from './shadow.js';
 import { drawMap } from './worldmap.js';
 import { wallClock, longDate, localDateOf, zoneAbbreviation, offsetMinutes, utcOffsetText } from './time.js';
 import { showPhotoSection } from './photo.js';
+import { loadCraters, showCraters, hideCraters } from './craters.js';
 
 const $ = (id) => document.getElementById(id);
 
@@ -14,6 +15,7 @@ export const EXAMPLE = { date: '2029-12-20', lat: '47.31', lon: '11.42', elevati
 let land = null;
 let last = null;
 let listKey = '';
+let craterRequest = 0;
 
 const site = () => Object.fromEntries(SITE_KEYS.map((k) => [k, $(k).value.trim()]));
 const chosenDate = () => $('eclipse-date').value.trim() || $('eclipse').value;
@@ -87,6 +89,8 @@ const FIELD_INPUT = { lat: 'lat', lon: 'lon', elevation: 'elevation', tz: 'tz', 
 async function showError(error, date, s) {
   $('result').hidden = true;
   $('photo').hidden = true;
+  craterRequest++;
+  hideCraters();
   $('error').hidden = false;
   // A missing eclipse: say so in plain words; the nearest eclipses follow as links.
   const named = Object.keys(error.fields ?? {}).length > 0;
@@ -124,7 +128,7 @@ function drawAll() {
   if (!last) return;
   const { local, eclipse, map, s } = last;
   drawTimeline($('timeline-chart'), local, eclipse);
-  drawShadow($('shadow-diagram'), eclipse);
+  drawShadow($('shadow-diagram'), eclipse, last.craters);
   drawMap($('world-map'), land, map, { lat: Number(s.lat), lon: Number(s.lon) });
 }
 
@@ -162,10 +166,23 @@ export async function show(event) {
     exportsFor(date, s);
     loadEclipses(s);
     showPhotoSection(date, s);
+    craterTimings(date, s);
     if (event) $('result').scrollIntoView({ block: 'start' });
   } catch (error) {
     await showError(error instanceof ApiError ? error : new ApiError(String(error.message ?? error), 0), date, s);
   }
+}
+
+/** Crater timings come after the rest (they take longer); the shadow diagram is redrawn with the features. */
+function craterTimings(date, s) {
+  const request = ++craterRequest;
+  showCraters(null);
+  loadCraters(date, s).then((answer) => {
+    if (request !== craterRequest || !last) return;
+    last.craters = answer;
+    showCraters(answer);
+    drawShadow($('shadow-diagram'), last.eclipse, answer);
+  }).catch((error) => { if (request === craterRequest) showCraters(null, error); });
 }
 
 function contactTable(local) {

@@ -137,21 +137,34 @@ function framing(p) {
   }
 }
 
+// A warning that differs only in its numbers from frame to frame ("ISO changed from 400 to 431…") is one warning;
+// each number that varies is shown as its range.
+const NUMBER = /\d+(?:\.\d+)?/g;
+
 function warnings(p) {
   // Each distinct warning once, with the local times it applies to.
   const seen = new Map();
   for (const r of p.timeline) {
     for (const w of r.warnings) {
-      const kind = w.split(':')[0];
-      if (!seen.has(kind)) seen.set(kind, { text: w, times: [] });
-      seen.get(kind).times.push(wallClock(r.local).hm);
+      const kind = w.includes(':') ? w.split(':')[0] : w.replace(NUMBER, '#');
+      if (!seen.has(kind)) seen.set(kind, { text: w, times: [], numbers: [] });
+      const entry = seen.get(kind);
+      entry.times.push(wallClock(r.local).hm);
+      if (!w.includes(':')) entry.numbers.push((w.match(NUMBER) ?? []).map(Number));
     }
   }
   const ul = $('photo-warnings');
   ul.innerHTML = '';
-  for (const { text, times } of seen.values()) {
+  for (const { text, times, numbers } of seen.values()) {
     const span = times.length > 1 ? `${times[0]}–${times[times.length - 1]}` : times[0];
-    ul.appendChild(Object.assign(document.createElement('li'), { textContent: `${span}: ${text}` }));
+    let slot = 0;
+    const merged = numbers.length > 1 ? text.replace(NUMBER, () => {
+      const values = numbers.map((n) => n[slot]);
+      slot++;
+      const [lo, hi] = [Math.min(...values), Math.max(...values)];
+      return lo === hi ? String(lo) : `${lo}–${hi}`;
+    }) : text;
+    ul.appendChild(Object.assign(document.createElement('li'), { textContent: `${span}: ${merged}` }));
   }
   // Notes for a run of rows (an ISO change) come once each, already naming their time range.
   for (const n of p.notes ?? []) ul.appendChild(Object.assign(document.createElement('li'), { textContent: n.text }));
