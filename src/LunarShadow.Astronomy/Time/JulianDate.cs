@@ -1,3 +1,5 @@
+using NodaTime;
+
 namespace LunarShadow.Astronomy.Time;
 
 /// <summary>
@@ -35,6 +37,19 @@ public readonly record struct JulianDate(double Day) : IComparable<JulianDate>
             return year + (Day - start) / (end - start);
         }
     }
+
+    // Meeus (1998), ch. 7, eq. 7.1: 1970 January 1, 0h (the Unix epoch, NodaTime's Instant zero) is JD 2440587.5; an
+    // Instant counts days of 86 400 s without leap seconds, as a Julian date of UTC does.
+    private const double UnixEpochDay = 2440587.5;
+
+    /// <summary>
+    /// The one JD → UTC conversion: the instant this date names when read as a Julian date of UTC, to the nearest
+    /// 100 ns tick (the double itself resolves about 40 µs near the present).
+    /// </summary>
+    public Instant ToUtcInstant() => Instant.FromUnixTimeTicks((long)Math.Round((Day - UnixEpochDay) * NodaConstants.TicksPerDay));
+
+    /// <summary>The Julian date of UTC of an instant (the inverse of <see cref="ToUtcInstant"/>).</summary>
+    public static JulianDate OfUtc(Instant utc) => new(UnixEpochDay + utc.ToUnixTimeTicks() / (double)NodaConstants.TicksPerDay);
 
     /// <summary>This date shifted by a number of SI seconds.</summary>
     public JulianDate PlusSeconds(double seconds) => new(Day + seconds / 86400.0);
