@@ -38,18 +38,17 @@ public readonly record struct JulianDate(double Day) : IComparable<JulianDate>
         }
     }
 
-    // Meeus (1998), ch. 7, eq. 7.1: 1970 January 1, 0h (the Unix epoch, NodaTime's Instant zero) is JD 2440587.5; an
-    // Instant counts days of 86 400 s without leap seconds, as a Julian date of UTC does.
-    private const double UnixEpochDay = 2440587.5;
-
+    // Meeus (1998), ch. 7: JD counts days of 86 400 s from −4712 January 1, 12h, NodaTime's Julian-date epoch; an Instant
+    // counts UTC without leap seconds, as a Julian date of UTC does. NodaTime's own conversion, so that every UTC the
+    // service has ever written stays the same to the millisecond.
     /// <summary>
-    /// The one JD → UTC conversion: the instant this date names when read as a Julian date of UTC, to the nearest
-    /// 100 ns tick (the double itself resolves about 40 µs near the present).
+    /// The one JD → UTC conversion: the instant this date names when read as a Julian date of UTC (good to about 25 µs
+    /// near the present: the double's resolution of a Julian date).
     /// </summary>
-    public Instant ToUtcInstant() => Instant.FromUnixTimeTicks((long)Math.Round((Day - UnixEpochDay) * NodaConstants.TicksPerDay));
+    public Instant ToUtcInstant() => Instant.FromJulianDate(Day);
 
     /// <summary>The Julian date of UTC of an instant (the inverse of <see cref="ToUtcInstant"/>).</summary>
-    public static JulianDate OfUtc(Instant utc) => new(UnixEpochDay + utc.ToUnixTimeTicks() / (double)NodaConstants.TicksPerDay);
+    public static JulianDate OfUtc(Instant utc) => new(utc.ToJulianDate());
 
     /// <summary>This date shifted by a number of SI seconds.</summary>
     public JulianDate PlusSeconds(double seconds) => new(Day + seconds / 86400.0);
