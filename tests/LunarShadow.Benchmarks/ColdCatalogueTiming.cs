@@ -22,10 +22,10 @@ internal static class ColdCatalogueTiming
         "from=1001-01-01&to=2000-12-31", "from=2001-01-01&to=3000-12-31",
     ];
 
-    public static void Run(int rounds)
+    public static void Run(int rounds, string? serviceDll = null)
     {
         var root = RepositoryRoot();
-        var api = Path.Combine(root, "src", "LunarShadow.Api", "bin", "Release", "net10.0", "LunarShadow.Api.dll");
+        var api = serviceDll is not null ? Path.GetFullPath(serviceDll) : Path.Combine(root, "src", "LunarShadow.Api", "bin", "Release", "net10.0", "LunarShadow.Api.dll");
         if (!File.Exists(api)) throw new FileNotFoundException("Build the service first: dotnet build -c Release src/LunarShadow.Api", api);
         var script = Path.Combine(root, "tests", "LunarShadow.Benchmarks", "ColdCatalogue", "astronomy-engine-search.mjs");
         var package = InstallAstronomyEngine();
