@@ -27,10 +27,12 @@ public class SkyShadingTests(BrowserFixture fixture)
                 foreach (var point in track) point!["sky"] = "day";
                 served++;
             }
-            await route.FulfillAsync(new RouteFulfillOptions { Response = response, Body = json.ToJsonString() });
+            // The body is re-encoded as plain JSON, so the answer's compression and length headers no longer apply.
+            var headers = response.Headers.Where(h => h.Key is not ("content-encoding" or "content-length")).ToDictionary(h => h.Key, h => h.Value);
+            await route.FulfillAsync(new RouteFulfillOptions { Status = response.Status, Headers = headers, Body = json.ToJsonString() });
         });
         await s.Page.GotoAsync(new Uri(fixture.Service.BaseAddress, "/").ToString());
-        await s.Page.WaitForFunctionAsync("document.querySelectorAll('#timeline-chart rect.sky').length > 10");
+        await s.Page.WaitForFunctionAsync("document.querySelectorAll('#timeline-chart rect.sky').length > 10", null, new PageWaitForFunctionOptions { Timeout = 120_000 });
         Assert.True(served > 0);
         var fills = await s.Page.EvaluateAsync<string[]>("[...document.querySelectorAll('#timeline-chart rect.sky')].map((r) => r.getAttribute('fill'))");
         Assert.All(fills, fill => Assert.Equal(DayColour, fill));
