@@ -62,7 +62,11 @@ internal static class ColdCatalogueTiming
     private static List<(double Seconds, string Hash, int Bytes)> FirstRequest(string api, string[] queries)
     {
         var port = FreePort();
-        var start = new ProcessStartInfo("dotnet", [api, "--urls", $"http://127.0.0.1:{port}"])
+        // A build (not a publish) has no wwwroot beside it, and the service is ready only with the page's files: point it at
+        // the project's own.
+        var webRoot = Path.Combine(Path.GetDirectoryName(api)!, "wwwroot");
+        if (!Directory.Exists(webRoot)) webRoot = Path.Combine(RepositoryRoot(), "src", "LunarShadow.Api", "wwwroot");
+        var start = new ProcessStartInfo("dotnet", [api, "--urls", $"http://127.0.0.1:{port}", "--webroot", webRoot])
         {
             RedirectStandardOutput = true,
             RedirectStandardError = true,
