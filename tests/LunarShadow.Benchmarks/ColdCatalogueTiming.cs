@@ -22,10 +22,10 @@ internal static class ColdCatalogueTiming
         "from=1001-01-01&to=2000-12-31", "from=2001-01-01&to=3000-12-31",
     ];
 
-    public static void Run(int rounds)
+    public static void Run(int rounds, string? serviceDll = null)
     {
         var root = RepositoryRoot();
-        var api = Path.Combine(root, "src", "LunarShadow.Api", "bin", "Release", "net10.0", "LunarShadow.Api.dll");
+        var api = serviceDll is not null ? Path.GetFullPath(serviceDll) : Path.Combine(root, "src", "LunarShadow.Api", "bin", "Release", "net10.0", "LunarShadow.Api.dll");
         if (!File.Exists(api)) throw new FileNotFoundException("Build the service first: dotnet build -c Release src/LunarShadow.Api", api);
         var script = Path.Combine(root, "tests", "LunarShadow.Benchmarks", "ColdCatalogue", "astronomy-engine-search.mjs");
         var package = InstallAstronomyEngine();
@@ -62,7 +62,11 @@ internal static class ColdCatalogueTiming
     private static List<(double Seconds, string Hash, int Bytes)> FirstRequest(string api, string[] queries)
     {
         var port = FreePort();
-        var start = new ProcessStartInfo("dotnet", [api, "--urls", $"http://127.0.0.1:{port}"])
+        // A build (not a publish) has no wwwroot beside it, and the service is ready only with the page's files: point it at
+        // the project's own.
+        var webRoot = Path.Combine(Path.GetDirectoryName(api)!, "wwwroot");
+        if (!Directory.Exists(webRoot)) webRoot = Path.Combine(RepositoryRoot(), "src", "LunarShadow.Api", "wwwroot");
+        var start = new ProcessStartInfo("dotnet", [api, "--urls", $"http://127.0.0.1:{port}", "--webroot", webRoot])
         {
             RedirectStandardOutput = true,
             RedirectStandardError = true,

@@ -46,7 +46,10 @@ public sealed record LocalResponse(
 /// <param name="MoonAzimuthDegrees">The Moon's azimuth, degrees.</param>
 /// <param name="HorizonAltitudeDegrees">The horizon profile's altitude at the Moon's azimuth, degrees.</param>
 /// <param name="SunAltitudeDegrees">The Sun's airless altitude, degrees.</param>
-public sealed record TrackPointResponse(string Utc, string Local, double MoonAltitudeDegrees, double MoonAzimuthDegrees, double HorizonAltitudeDegrees, double SunAltitudeDegrees);
+/// <param name="Sky">day, civil-twilight, nautical-twilight, astronomical-twilight or night, by the Sun's altitude (the
+/// service's one twilight classification, so clients need no copy of the thresholds).</param>
+public sealed record TrackPointResponse(
+    string Utc, string Local, double MoonAltitudeDegrees, double MoonAzimuthDegrees, double HorizonAltitudeDegrees, double SunAltitudeDegrees, string Sky);
 
 /// <summary>The site as the service understood it.</summary>
 /// <param name="Name">The name given, if any.</param>

@@ -66,8 +66,10 @@ internal static class LocalFormats
         "name", "lat_deg", "lon_deg", "tz", "tz_abbreviations", "eclipse_date", "local_date", "morning_date", "visible",
         "first_visible_utc", "first_visible_local", "last_visible_utc", "last_visible_local",
         "visible_penumbral_min", "visible_partial_min", "visible_total_min",
-        "max_visible_umbral_magnitude", "max_visible_utc", "max_visible_local", "max_visible_altitude_deg", "moon_horizon",
+        "greatest_visible_umbral_magnitude", "greatest_visible_utc", "greatest_visible_local", "greatest_visible_altitude_deg", "moon_horizon",
         "session_start_utc", "session_start_local", "session_end_utc", "session_end_local", "summary", "public_night_note",
+        // Deprecated: the former names of the greatest_visible_* columns, last, written for one more release.
+        "max_visible_umbral_magnitude", "max_visible_utc", "max_visible_local", "max_visible_altitude_deg",
     ];
 
     /// <summary>Many sites as CSV, one row per site in request order, every instant in UTC and local time.</summary>
@@ -84,7 +86,8 @@ internal static class LocalFormats
                 whole.FirstOrDefault()?.StartUtc, whole.FirstOrDefault()?.StartLocal, whole.LastOrDefault()?.EndUtc, whole.LastOrDefault()?.EndLocal,
                 Minutes("penumbral"), Minutes("partial"), Minutes("total"),
                 r.GreatestVisibleUmbralMagnitude?.Value, r.GreatestVisibleUmbralMagnitude?.Utc, r.GreatestVisibleUmbralMagnitude?.Local, r.GreatestVisibleUmbralMagnitude?.AltitudeDegrees,
-                r.MoonHorizon, session?.DoorsOpenUtc, session?.DoorsOpen, session?.DoorsCloseUtc, session?.DoorsClose, r.Summary, r.PublicNight?.Note);
+                r.MoonHorizon, session?.DoorsOpenUtc, session?.DoorsOpen, session?.DoorsCloseUtc, session?.DoorsClose, r.Summary, r.PublicNight?.Note,
+                r.GreatestVisibleUmbralMagnitude?.Value, r.GreatestVisibleUmbralMagnitude?.Utc, r.GreatestVisibleUmbralMagnitude?.Local, r.GreatestVisibleUmbralMagnitude?.AltitudeDegrees);
         }
         return csv.ToString();
     }

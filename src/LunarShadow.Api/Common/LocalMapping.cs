@@ -57,9 +57,11 @@ internal static class LocalMapping
             var h = minutes / 60;
             var moon = sky.MoonAt(h);
             var utc = toUtc(sky.InstantAt(h));
+            var sun = sky.SunAltitudeAt(h);
             points.Add(new TrackPointResponse(TimeFormats.Utc(utc), TimeFormats.Local(utc, l.Site.TimeZone).Text,
                 TimeFormats.Round(moon.ApparentAltitude.Degrees, 2), TimeFormats.Round(moon.Azimuth.Degrees, 2),
-                TimeFormats.Round(l.Site.Horizon.AltitudeAt(moon.Azimuth).Degrees, 2), TimeFormats.Round(sky.SunAltitudeAt(h).Degrees, 2)));
+                TimeFormats.Round(l.Site.Horizon.AltitudeAt(moon.Azimuth).Degrees, 2), TimeFormats.Round(sun.Degrees, 2),
+                WireNames.Of(SkyStates.FromSunAltitude(sun))));
         }
         return points;
     }

@@ -124,7 +124,7 @@ internal static class SiteWording
     public static List<string> Cautions(LocalCircumstances l)
     {
         var cautions = new List<string>();
-        if (l.Contacts.Any(c => c.Visible && c.SunAltitude.Degrees > -6))
+        if (l.Contacts.Any(c => c.Visible && c.SunAltitude > SkyStates.CivilTwilightEndAltitude))
             cautions.Add("The Sun is up or only just below the horizon, opposite the Moon, during part of the visible eclipse: never point binoculars, telescopes or camera lenses near it, and keep optics capped while turning.");
         if (l.AnyVisible)
             cautions.Add("Observing at night: choose a site you can reach and leave safely in the dark, watch for traffic and uneven ground, dress for the cold, and follow local rules for access and lights.");
@@ -197,7 +197,8 @@ internal static class SiteWording
             }));
         foreach (var c in local.Contacts.Where(c => c.Visible && c.Utc >= s.DoorsOpen && c.Utc <= s.DoorsClose))
             moments.Add((c.Utc, ContactMoment(c.Label)));
-        var stage = LocalOutline.StageAt(local.Eclipse, local.Eclipse.GreatestEclipse.PlusSeconds((s.DoorsOpen - local.Contacts.First(c => c.Name is null).Utc).TotalSeconds));
+        var stage = EclipsePhases.At(local.Eclipse, local.Eclipse.GreatestEclipse.PlusSeconds((s.DoorsOpen - local.Contacts.First(c => c.Name is null).Utc).TotalSeconds))
+            ?? EclipsePhase.Penumbral;
         if (moments.Count == 0 || moments.Min(m => m.At) > s.DoorsOpen)
             moments.Insert(0, (s.DoorsOpen, $"the eclipse is in its {StageName(stage)}"));
         lines.AddRange(moments.OrderBy(m => m.At).Select(m => $"- {Clock(m.At, zone)}: {m.What}"));

@@ -12,10 +12,8 @@ namespace LunarShadow.Api.Formatting;
 /// </summary>
 internal static partial class TimeFormats
 {
-    private static readonly double UnixEpochJulianDate = 2440587.5;
-
     /// <summary>A UTC instant, e.g. 2025-03-14T06:58:00.000Z or -1999-06-26T13:00:00.000Z.</summary>
-    public static string Utc(Instant instant) => Write(ToMillisecond(instant).ToJulianDate(), "Z");
+    public static string Utc(Instant instant) => Write(JulianDate.OfUtc(ToMillisecond(instant)).Day, "Z");
 
     /// <summary>
     /// The instant rounded to the millisecond (half away from zero) in whole ticks: UTC and local times are both written
@@ -45,13 +43,17 @@ internal static partial class TimeFormats
         var sign = seconds < 0 ? '-' : '+';
         var abs = Math.Abs(seconds);
         // Round the instant to the millisecond before shifting it, so that the local text is exactly the UTC text plus the offset.
-        var text = Write((ToMillisecond(instant) + Duration.FromSeconds(seconds)).ToJulianDate(), string.Create(CultureInfo.InvariantCulture, $"{sign}{abs / 3600:00}:{abs / 60 % 60:00}"));
+        var text = Write(JulianDate.OfUtc(ToMillisecond(instant) + Duration.FromSeconds(seconds)).Day, string.Create(CultureInfo.InvariantCulture, $"{sign}{abs / 3600:00}:{abs / 60 % 60:00}"));
         return (text, SiteWording.RepeatedTimeNote(instant, zone));
     }
 
 
     /// <summary>The calendar date (astronomers' calendar) of a UTC instant, YYYY-MM-DD.</summary>
-    public static string UtcDate(Instant instant) => Write(ToMillisecond(instant).ToJulianDate(), "")[..DateLength(ToMillisecond(instant).ToJulianDate())];
+    public static string UtcDate(Instant instant)
+    {
+        var jd = JulianDate.OfUtc(ToMillisecond(instant)).Day;
+        return Write(jd, "")[..DateLength(jd)];
+    }
 
     /// <summary>A number rounded for display.</summary>
     public static double Round(double value, int digits) => Math.Round(value, digits, MidpointRounding.AwayFromZero);
@@ -83,16 +85,13 @@ internal static partial class TimeFormats
         }
         var jd = JulianDate.FromCalendar(date.Year, date.Month, date.Day, date.IsGregorian).Day
             + (hour * 3600 + minute * 60 + second - offsetMinutes * 60) / 86400.0;
-        instant = FromJulianDate(jd);
+        instant = ToMillisecond(new JulianDate(jd).ToUtcInstant());
         return true;
     }
 
     /// <summary>Reads YYYY-MM-DD (astronomers' calendar, optional minus sign); false for dates that do not exist.</summary>
     public static bool TryParseDate(string text, out CalendarDate date) => TryDate(text.Trim(), out date) & DateSyntax().IsMatch(text.Trim());
 
-    /// <summary>The instant of a Julian date of UTC, rounded to the millisecond.</summary>
-    public static Instant FromJulianDate(double jd) =>
-        Instant.FromUnixTimeMilliseconds((long)Math.Round((jd - UnixEpochJulianDate) * 86_400_000.0, MidpointRounding.AwayFromZero));
 
     private static bool TryDate(string text, out CalendarDate date)
     {

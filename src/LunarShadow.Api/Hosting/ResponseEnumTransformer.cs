@@ -27,12 +27,14 @@ internal sealed class ResponseEnumTransformer : IOpenApiSchemaTransformer
         [(typeof(PathPointResponse), "name")] = WireNames.Contacts,
         [(typeof(LocalContactResponse), "name")] = WireNames.Contacts,
         [(typeof(LocalContactResponse), "sky")] = WireNames.All<SkyState>(),
+        [(typeof(TrackPointResponse), "sky")] = WireNames.All<SkyState>(),
         [(typeof(MoonEventResponse), "type")] = WireNames.All<MoonEventType>(),
         [(typeof(LocalResponse), "moonHorizon")] = WireNames.All<MoonHorizonState>(),
         [(typeof(VisiblePhaseResponse), "phase")] = WireNames.All<EclipsePhase>(),
         [(typeof(UpcomingCriteriaEcho), "phase")] = WireNames.All<EclipsePhase>(),
         [(typeof(TimelineRowResponse), "phase")] = WireNames.All<MoonPhaseState>(),
         [(typeof(TimelineRowResponse), "contact")] = WireNames.Contacts,
+        [(typeof(WarningResponse), "code")] = WireNames.All<PhotoWarningCode>(),
         [(typeof(CameraEcho), "mount")] = [.. PhotoParameters.Mounts.Keys],
     };
 

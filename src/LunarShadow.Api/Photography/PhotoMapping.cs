@@ -29,7 +29,7 @@ internal static class PhotoMapping
                 new ExposureResponse(Seconds(r.Exposure.ShutterSeconds), Math.Round(r.Exposure.Iso), r.Exposure.Aperture, TimeFormats.Round(r.Exposure.Ev100, 2),
                     plan.Settings.BracketStops, r.Exposure.BracketShutters.Select(Seconds).ToList()),
                 r.Warnings.Select(PhotoWarningText.Sentence).ToList(),
-                r.Warnings.Select(w => new WarningResponse(PhotoWarningText.Code(w.Code), w.Numbers.ToDictionary(n => n.Key, n => TimeFormats.Round(n.Value, 4)))).ToList())).ToList(),
+                r.Warnings.Select(w => new WarningResponse(WireNames.Of(w.Code), w.Numbers.ToDictionary(n => n.Key, n => TimeFormats.Round(n.Value, 4)))).ToList())).ToList(),
             new FramingResponse(TimeFormats.Round(f.FieldWidth.Degrees, 3), TimeFormats.Round(f.FieldHeight.Degrees, 3), TimeFormats.Round(f.MoonDiameterPixels, 1),
                 TimeFormats.Round(f.MoonFractionOfFrameHeight, 4), f.TrailingLimitSeconds is { } t ? Seconds(t) : null,
                 Seconds(f.FixedTripodLimitSeconds), Seconds(f.SiderealLimitSeconds), f.MinutesInFixedFrame),

@@ -1,4 +1,5 @@
 using System.Globalization;
+using LunarShadow.Api.Common;
 using LunarShadow.Api.Formatting;
 using LunarShadow.Astronomy.Photography;
 using NodaTime;
@@ -8,24 +9,6 @@ namespace LunarShadow.Api.Photography;
 /// <summary>The one place where the photo plan's warning codes and numbers become English sentences.</summary>
 internal static class PhotoWarningText
 {
-    /// <summary>The code as written on the wire, e.g. sky-limits-exposure.</summary>
-    public static string Code(PhotoWarningCode code) => code switch
-    {
-        PhotoWarningCode.MoonBelowHorizon => "moon-below-horizon",
-        PhotoWarningCode.LowAltitude => "low-altitude",
-        PhotoWarningCode.Daylight => "daylight",
-        PhotoWarningCode.TwilightSky => "twilight-sky",
-        PhotoWarningCode.SkyLimitsExposure => "sky-limits-exposure",
-        PhotoWarningCode.Trailing => "trailing",
-        PhotoWarningCode.LeavingFrame => "leaving-frame",
-        PhotoWarningCode.ApertureClosed => "aperture-closed",
-        PhotoWarningCode.IsoChanged => "iso-changed",
-        PhotoWarningCode.BeyondFastestShutter => "beyond-fastest-shutter",
-        PhotoWarningCode.BeyondSlowestShutter => "beyond-slowest-shutter",
-        PhotoWarningCode.IsoOutOfRange => "iso-out-of-range",
-        _ => code.ToString(),
-    };
-
     /// <summary>The warning in one English sentence.</summary>
     public static string Sentence(PhotoWarning w)
     {
@@ -44,7 +27,7 @@ internal static class PhotoWarningText
             PhotoWarningCode.BeyondFastestShutter => F($"Even at {Shutter(N("fastestSeconds"))} this over-exposes by {N("overStops"):0.#} stops: use a neutral-density filter or a smaller aperture."),
             PhotoWarningCode.BeyondSlowestShutter => F($"Even at {Shutter(N("slowestSeconds"))} this under-exposes by {N("underStops"):0.#} stops: open the lens if it can, raise the ISO further, or stack frames."),
             PhotoWarningCode.IsoOutOfRange => F($"The shutter given needs ISO {N("isoNeeded"):0}, outside 25–409600; ISO {N("iso"):0} is used."),
-            _ => Code(w.Code),
+            _ => WireNames.Of(w.Code),
         };
     }
 

@@ -16,7 +16,9 @@ internal static class UpcomingFormats
     [
         "date", "kind", "local_date", "morning_date", "greatest_utc", "greatest_local", "qualifying_minutes",
         "first_qualifying_utc", "first_qualifying_local", "last_qualifying_utc", "last_qualifying_local",
-        "max_visible_umbral_magnitude", "summary",
+        "greatest_visible_umbral_magnitude", "summary",
+        // Deprecated: the former name of greatest_visible_umbral_magnitude, last, written for one more release.
+        "max_visible_umbral_magnitude",
     ];
 
     /// <summary>One row per eclipse: the UTC date that names it, and the local evening date of the night it is seen in.</summary>
@@ -28,7 +30,8 @@ internal static class UpcomingFormats
             var first = i.Qualifying.Count > 0 ? i.Qualifying.MinBy(q => q.StartUtc, StringComparer.Ordinal) : null;
             var last = i.Qualifying.Count > 0 ? i.Qualifying.MaxBy(q => q.EndUtc, StringComparer.Ordinal) : null;
             csv.Row(i.Date, i.Kind, i.Night.Evening, i.Night.Morning, i.GreatestEclipseUtc, i.GreatestEclipseLocal, i.QualifyingMinutes,
-                first?.StartUtc, first?.StartLocal, last?.EndUtc, last?.EndLocal, i.MaxVisibleUmbralMagnitude?.Value, i.Summary);
+                first?.StartUtc, first?.StartLocal, last?.EndUtc, last?.EndLocal, i.GreatestVisibleUmbralMagnitude?.Value, i.Summary,
+                i.GreatestVisibleUmbralMagnitude?.Value);
         }
         return csv.ToString();
     }

@@ -55,7 +55,7 @@ internal sealed class QueryReader
             Fail(field, $"{field} must be an ISO 8601 instant with Z or an offset, such as 2025-03-14T06:58:00Z, years {SupportedYears} (Julian calendar before 1582-10-15); got '{Clip(raw)}'.");
             return null;
         }
-        if (!Astronomy.Time.SupportedRange.Contains(new Astronomy.Time.JulianDate(instant.ToJulianDate())))
+        if (!Astronomy.Time.SupportedRange.Contains(Astronomy.Time.JulianDate.OfUtc(instant)))
         {
             Fail(field, $"{field} must lie in the years {SupportedYears}; got {Clip(raw)}.");
             return null;

@@ -103,7 +103,7 @@ public sealed class EclipseFinder
         // ΔT reaches about 13 hours at the ends of the span; search a day beyond each end, then keep by UTC.
         foreach (var e in Between(TtInstant.FromJulianDate(startDay - 1), TtInstant.FromJulianDate(endDay + 1), cancellationToken))
         {
-            var utc = time.ToUtc(e.GreatestEclipse).ToJulianDate();
+            var utc = JulianDate.OfUtc(time.ToUtc(e.GreatestEclipse)).Day;
             if (utc >= startDay && utc < endDay) yield return e;
         }
     }

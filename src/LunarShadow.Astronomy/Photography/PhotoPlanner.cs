@@ -45,9 +45,13 @@ public static class PhotoPlanner
             var radii = ShadowCrossSection.RadiiTowardMoon(eclipse.Model, g);
             var (d, s) = (g.Separation.Radians, g.MoonSemiDiameter.Radians);
             // A row at a contact belongs to the phase that starts there (at U2 the Moon is just wholly inside the umbra).
-            var state = StartingPhase(label) ?? (d <= radii.Umbra.Radians - s ? MoonPhaseState.Total
-                : d < radii.Umbra.Radians + s ? MoonPhaseState.Partial
-                : d < radii.Penumbra.Radians + s ? MoonPhaseState.Penumbral : MoonPhaseState.Uneclipsed);
+            var state = EclipsePhases.At(eclipse, tt) switch
+            {
+                EclipsePhase.Total => MoonPhaseState.Total,
+                EclipsePhase.Partial => MoonPhaseState.Partial,
+                EclipsePhase.Penumbral => MoonPhaseState.Penumbral,
+                _ => MoonPhaseState.Uneclipsed,
+            };
             var umbral = DiscCoverage.FractionInside(radii.Umbra.Radians, s, d);
             var penumbral = Math.Max(0, DiscCoverage.FractionInside(radii.Penumbra.Radians, s, d) - umbral);
             var limb = EclipsedMoonBrightness.SunlitLimb(g, radii, settings.Danjon);
@@ -71,8 +75,8 @@ public static class PhotoPlanner
             var altitude = moon.ApparentAltitude.Degrees;
             if (altitude < 0) warnings.Add(new PhotoWarning(PhotoWarningCode.MoonBelowHorizon));
             else if (altitude < LowAltitudeDegrees) warnings.Add(Warn(PhotoWarningCode.LowAltitude, ("altitudeDegrees", altitude)));
-            if (sun > -50.0 / 60) warnings.Add(Warn(PhotoWarningCode.Daylight, ("sunAltitudeDegrees", sun)));
-            else if (sun > -12) warnings.Add(Warn(PhotoWarningCode.TwilightSky, ("sunAltitudeDegrees", sun), ("skyLuminance", skyLuminance)));
+            if (sun > SkyStates.SunsetAltitude.Degrees) warnings.Add(Warn(PhotoWarningCode.Daylight, ("sunAltitudeDegrees", sun)));
+            else if (sun > SkyStates.NauticalTwilightEndAltitude.Degrees) warnings.Add(Warn(PhotoWarningCode.TwilightSky, ("sunAltitudeDegrees", sun), ("skyLuminance", skyLuminance)));
             warnings.AddRange(exposure.Warnings);
             if (framing.TrailingLimitSeconds is { } limit && exposure.ShutterSeconds > limit)
                 warnings.Add(Trailing(exposure, limit, camera, framing));
@@ -103,15 +107,6 @@ public static class PhotoPlanner
             ("shorterFocalLengthMm", camera.EffectiveFocalLengthMm * limit / exposure.ShutterSeconds),
             ("stackFrames", Math.Ceiling(exposure.ShutterSeconds / limit - 1e-9)),
             ("siderealLimitSeconds", framing.SiderealLimitSeconds));
-
-    private static MoonPhaseState? StartingPhase(string? contact) => contact switch
-    {
-        "P1" or "U4" => MoonPhaseState.Penumbral,
-        "U1" or "U3" => MoonPhaseState.Partial,
-        "U2" => MoonPhaseState.Total,
-        "P4" => MoonPhaseState.Uneclipsed,
-        _ => null,
-    };
 
     // Rows at every visible contact (and greatest eclipse) and on whole multiples of the interval within the visible part.
     private static IEnumerable<(TtInstant Tt, string? Label)> RowInstants(LocalCircumstances local, double intervalMinutes)
@@ -212,16 +207,12 @@ public static class PhotoPlanner
         var east = new Units.CartesianVector(-Math.Sin(center.Azimuth.Radians), Math.Cos(center.Azimuth.Radians), 0);
         var up = c.Cross(east);
         var v = (c + east * x + up * y).Normalized();
-        return (Angle.FromRadians(Math.Atan2(v.Y, v.X)).NormalizedPositive(), Angle.FromRadians(Math.Asin(v.Z)));
+        var h = Frames.HorizontalCoordinates.FromLocalComponents(v.X, v.Y, v.Z);
+        return (h.Azimuth, h.Altitude);
     }
 
     // Horizontal unit vector: x north, y east, z up.
-    private static Units.CartesianVector Direction(LocalMoon m)
-    {
-        var (sinAlt, cosAlt) = Math.SinCos(m.ApparentAltitude.Radians);
-        var (sinAz, cosAz) = Math.SinCos(m.Azimuth.Radians);
-        return new Units.CartesianVector(cosAlt * cosAz, cosAlt * sinAz, sinAlt);
-    }
+    private static Units.CartesianVector Direction(LocalMoon m) => new Frames.HorizontalCoordinates(m.ApparentAltitude, m.Azimuth).LocalUnitVector();
 
     private static double AngleBetween(LocalMoon a, LocalMoon b)
     {
@@ -236,7 +227,7 @@ public static class PhotoPlanner
             "Never aim a lens, telescope or finder near the Sun; at a rising or setting eclipsed Moon the Sun is just below (or above) the opposite horizon — keep caps on while slewing.",
             "At night: set up in daylight if you can, keep to firm ground away from traffic, carry a red light, dress for the cold and follow local access rules.",
         };
-        if (local.Contacts.Any(c => c.Visible && c.SunAltitude.Degrees > -6))
+        if (local.Contacts.Any(c => c.Visible && c.SunAltitude > SkyStates.CivilTwilightEndAltitude))
             cautions.Insert(0, "The Sun is up or only just set during part of the visible eclipse: do not look through an optical viewfinder toward the sunward sky.");
         return cautions;
     }

@@ -74,10 +74,6 @@ public sealed record LocalOutline(
         return new LocalOutline(visibility, comes, lost, missed, local.VisibleMinutes(EclipsePhase.Total), totality, night);
     }
 
-    /// <summary>The innermost phase in progress at an instant between P1 and P4.</summary>
-    public static EclipsePhase StageAt(LunarEclipse e, TtInstant tt)
-    {
-        bool Within(ContactName a, ContactName b) => e.Contact(a) is { } ca && e.Contact(b) is { } cb && ca.Tt <= tt && tt <= cb.Tt;
-        return Within(ContactName.U2, ContactName.U3) ? EclipsePhase.Total : Within(ContactName.U1, ContactName.U4) ? EclipsePhase.Partial : EclipsePhase.Penumbral;
-    }
+    // Between P1 and P4 (as comes and lost are) some phase is always in progress.
+    private static EclipsePhase StageAt(LunarEclipse e, TtInstant tt) => EclipsePhases.At(e, tt) ?? EclipsePhase.Penumbral;
 }

@@ -53,7 +53,7 @@ public sealed class LocalSky
         var moon = _night.MoonKm(hours);
         var (horizontal, distance, topocentricTrueOfDate) = Horizontal(moon, gast);
         var semiDiameter = BodyDisc.MoonSemiDiameter(distance);
-        var trueAltitude = Angle.FromRadians(horizontal.Altitude);
+        var trueAltitude = horizontal.Altitude;
         var limbTrue = trueAltitude + semiDiameter;
 
         // Meeus (1998), eq. 14.1: the parallactic angle q from the hour angle, declination and latitude.
@@ -66,7 +66,7 @@ public sealed class LocalSky
             trueAltitude,
             AtmosphericRefraction.Apply(trueAltitude, _site.Air),
             AtmosphericRefraction.Apply(limbTrue, _site.Air),
-            Angle.FromRadians(horizontal.Azimuth).NormalizedPositive(),
+            horizontal.Azimuth,
             Angle.FromRadians(q).NormalizedPositive(),
             semiDiameter);
     }
@@ -78,12 +78,12 @@ public sealed class LocalSky
     public (double UpperLimbAltitude, double Azimuth) MoonLimbAt(double hours)
     {
         var (horizontal, distance, _) = Horizontal(_night.MoonKm(hours), SiderealTime(hours));
-        var limbTrue = Angle.FromRadians(horizontal.Altitude) + BodyDisc.MoonSemiDiameter(distance);
-        return (AtmosphericRefraction.Apply(limbTrue, _site.Air).Radians, horizontal.Azimuth);
+        var limbTrue = horizontal.Altitude + BodyDisc.MoonSemiDiameter(distance);
+        return (AtmosphericRefraction.Apply(limbTrue, _site.Air).Radians, horizontal.Azimuth.Radians);
     }
 
     /// <summary>The Sun's true (airless) altitude at some hours from greatest eclipse.</summary>
-    public Angle SunAltitudeAt(double hours) => Angle.FromRadians(Horizontal(_night.SunKm(hours), SiderealTime(hours)).Horizontal.Altitude);
+    public Angle SunAltitudeAt(double hours) => Horizontal(_night.SunKm(hours), SiderealTime(hours)).Horizontal.Altitude;
 
     /// <summary>The instant some hours from greatest eclipse.</summary>
     public TtInstant InstantAt(double hours) => _night.InstantAt(hours);
@@ -94,15 +94,13 @@ public sealed class LocalSky
         return _night.SiderealTime(tt, new Ut1Instant(tt.JulianDate.PlusSeconds(-_deltaTSeconds)));
     }
 
-    private ((double Altitude, double Azimuth) Horizontal, double Distance, CartesianVector TopocentricTrueOfDate) Horizontal(CartesianVector bodyTrueOfDate, Angle gast)
+    private (HorizontalCoordinates Horizontal, double Distance, CartesianVector TopocentricTrueOfDate) Horizontal(CartesianVector bodyTrueOfDate, Angle gast)
     {
         // Into the Earth-fixed frame (a rotation by the sidereal time; polar motion neglected), then about the site.
         var earthFixed = RotationMatrix.AboutZ(gast.Radians) * bodyTrueOfDate;
         var relative = earthFixed - _siteEarthFixed;
-        var distance = relative.Length;
-        var altitude = Math.Asin(relative.Dot(_up) / distance);
-        var azimuth = Math.Atan2(relative.Dot(_east), relative.Dot(_north));
+        var horizontal = HorizontalCoordinates.FromLocalComponents(relative.Dot(_north), relative.Dot(_east), relative.Dot(_up));
         var topocentricTrueOfDate = RotationMatrix.AboutZ(-gast.Radians) * relative;
-        return ((altitude, azimuth), distance, topocentricTrueOfDate);
+        return (horizontal, relative.Length, topocentricTrueOfDate);
     }
 }

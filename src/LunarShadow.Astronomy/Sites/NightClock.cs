@@ -15,13 +15,13 @@ public static class NightClock
     public static Func<TtInstant, Instant> For(LunarEclipse eclipse, TimeScaleConverter time)
     {
         var center = eclipse.GreatestEclipse;
-        var offset = center.JulianDate.Day - time.ToUtc(center).ToJulianDate();
+        var offsetDays = OffsetDays(center, time);
         var early = center.PlusSeconds(-EclipseNightSky.HalfWidthHours * 3600);
         var late = center.PlusSeconds(EclipseNightSky.HalfWidthHours * 3600);
-        var steady = Math.Abs(early.JulianDate.Day - time.ToUtc(early).ToJulianDate() - offset) < 1e-3 / 86400
-            && Math.Abs(late.JulianDate.Day - time.ToUtc(late).ToJulianDate() - offset) < 1e-3 / 86400;
-        return steady
-            ? tt => Instant.FromUnixTimeTicks((long)Math.Round((tt.JulianDate.Day - offset - 2440587.5) * 864_000_000_000.0))
-            : time.ToUtc;
+        var steady = Math.Abs(OffsetDays(early, time) - offsetDays) < 1e-3 / 86400 && Math.Abs(OffsetDays(late, time) - offsetDays) < 1e-3 / 86400;
+        return steady ? tt => tt.JulianDate.PlusDays(-offsetDays).ToUtcInstant() : time.ToUtc;
     }
+
+    // TT − UTC at an instant, in days.
+    private static double OffsetDays(TtInstant tt, TimeScaleConverter time) => tt.JulianDate.Day - JulianDate.OfUtc(time.ToUtc(tt)).Day;
 }

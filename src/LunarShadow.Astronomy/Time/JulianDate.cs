@@ -1,3 +1,5 @@
+using NodaTime;
+
 namespace LunarShadow.Astronomy.Time;
 
 /// <summary>
@@ -35,6 +37,18 @@ public readonly record struct JulianDate(double Day) : IComparable<JulianDate>
             return year + (Day - start) / (end - start);
         }
     }
+
+    // Meeus (1998), ch. 7: JD counts days of 86 400 s from −4712 January 1, 12h, NodaTime's Julian-date epoch; an Instant
+    // counts UTC without leap seconds, as a Julian date of UTC does. NodaTime's own conversion, so that every UTC the
+    // service has ever written stays the same to the millisecond.
+    /// <summary>
+    /// The one JD → UTC conversion: the instant this date names when read as a Julian date of UTC (good to about 25 µs
+    /// near the present: the double's resolution of a Julian date).
+    /// </summary>
+    public Instant ToUtcInstant() => Instant.FromJulianDate(Day);
+
+    /// <summary>The Julian date of UTC of an instant (the inverse of <see cref="ToUtcInstant"/>).</summary>
+    public static JulianDate OfUtc(Instant utc) => new(utc.ToJulianDate());
 
     /// <summary>This date shifted by a number of SI seconds.</summary>
     public JulianDate PlusSeconds(double seconds) => new(Day + seconds / 86400.0);

@@ -25,7 +25,7 @@ public sealed class TimeScaleConverter(IDeltaTModel deltaTModel)
     /// <summary>The TT instant of a UTC instant; throws for instants outside the supported years.</summary>
     public TtInstant ToTerrestrialTime(Instant utc)
     {
-        var jdUtc = new JulianDate(utc.ToJulianDate());
+        var jdUtc = JulianDate.OfUtc(utc);
         SupportedRange.EnsureContains(jdUtc);
         if (UsesLeapSeconds(utc))
             return new TtInstant(jdUtc.PlusSeconds(LeapSecondTable.TaiMinusUtcSeconds(utc) + TtMinusTaiSeconds));
@@ -38,11 +38,11 @@ public sealed class TimeScaleConverter(IDeltaTModel deltaTModel)
     public Instant ToUtc(TtInstant tt)
     {
         var ut1 = ToUniversalTime(tt).JulianDate;
-        var guess = Instant.FromJulianDate(ut1.Day);
+        var guess = ut1.ToUtcInstant();
         if (!UsesLeapSeconds(guess)) return guess;
-        var utc = Instant.FromJulianDate(tt.JulianDate.PlusSeconds(-TtMinusTaiSeconds - LeapSecondTable.TaiMinusUtcSeconds(guess)).Day);
+        var utc = tt.JulianDate.PlusSeconds(-TtMinusTaiSeconds - LeapSecondTable.TaiMinusUtcSeconds(guess)).ToUtcInstant();
         return LeapSecondTable.Covers(utc)
-            ? Instant.FromJulianDate(tt.JulianDate.PlusSeconds(-TtMinusTaiSeconds - LeapSecondTable.TaiMinusUtcSeconds(utc)).Day)
+            ? tt.JulianDate.PlusSeconds(-TtMinusTaiSeconds - LeapSecondTable.TaiMinusUtcSeconds(utc)).ToUtcInstant()
             : utc;
     }
 

@@ -126,11 +126,17 @@ public class OpenApiDocumentTests(ApiFactory factory) : IClassFixture<ApiFactory
             schemas[schema].Properties![property].Enum!.Where(e => e is not null).Select(e => e.GetValue<string>()).ToArray();
         Assert.Equal(["penumbral", "partial", "total"], Enum("EclipseResponse", "kind"));
         Assert.Equal(["day", "civil-twilight", "nautical-twilight", "astronomical-twilight", "night"], Enum("LocalContactResponse", "sky"));
+        Assert.Equal(["day", "civil-twilight", "nautical-twilight", "astronomical-twilight", "night"], Enum("TrackPointResponse", "sky"));
         Assert.Equal(["rise", "set", "clears-horizon-profile", "hidden-by-horizon-profile"], Enum("MoonEventResponse", "type"));
         Assert.Equal(["penumbral", "partial", "total"], Enum("VisiblePhaseResponse", "phase"));
         Assert.Equal(["uneclipsed", "penumbral", "partial", "total"], Enum("TimelineRowResponse", "phase"));
         Assert.Contains("greatest", Enum("LocalContactResponse", "name"));
         Assert.Equal(["P1", "U1", "U2", "U3", "U4", "P4"], Enum("ContactResponse", "name"));
+        // Every photo warning code the library defines, written by the one naming policy (kebab-case lower).
+        Assert.Equal(
+            ["moon-below-horizon", "low-altitude", "daylight", "twilight-sky", "sky-limits-exposure", "trailing", "leaving-frame",
+                "aperture-closed", "iso-changed", "beyond-fastest-shutter", "beyond-slowest-shutter", "iso-out-of-range"],
+            Enum("WarningResponse", "code"));
         foreach (var path in new[] { "/health/live", "/health/ready" })
             Assert.Contains(HttpMethod.Get, document.Paths[path].Operations!.Keys);
     }

@@ -255,6 +255,9 @@ public class ExportWalkTests(UnthrottledApiFactory factory)
                 LocalIsUtcPlusOffset(csv.GetString("greatest_utc"), csv.GetString("greatest_local"), zone, site.Name);
                 LocalIsUtcPlusOffset(csv.GetString("first_qualifying_utc"), csv.GetString("first_qualifying_local"), zone, site.Name);
                 LocalIsUtcPlusOffset(csv.GetString("last_qualifying_utc"), csv.GetString("last_qualifying_local"), zone, site.Name);
+                // docs/api.md: max_visible_umbral_magnitude is now greatest_visible_umbral_magnitude, the old name copied at the end.
+                Assert.Equal(csv.GetString("greatest_visible_umbral_magnitude"), csv.GetString("max_visible_umbral_magnitude"));
+                Assert.Equal(item.GetProperty("greatestVisibleUmbralMagnitude").ValueKind == JsonValueKind.Null, csv.GetString("greatest_visible_umbral_magnitude") is null or "");
             }
             Assert.Equal(items.Count, n);
             var feed = Calendar.Load(await _client.GetStringAsync(url + "&format=ics"))!;
@@ -292,7 +295,10 @@ public class ExportWalkTests(UnthrottledApiFactory factory)
                 Assert.Equal(entry.GetProperty("night").GetProperty("evening").GetString(), csv.GetString("local_date"));
                 LocalIsUtcPlusOffset(csv.GetString("first_visible_utc"), csv.GetString("first_visible_local"), zone, site.Name);
                 LocalIsUtcPlusOffset(csv.GetString("last_visible_utc"), csv.GetString("last_visible_local"), zone, site.Name);
-                LocalIsUtcPlusOffset(csv.GetString("max_visible_utc"), csv.GetString("max_visible_local"), zone, site.Name);
+                LocalIsUtcPlusOffset(csv.GetString("greatest_visible_utc"), csv.GetString("greatest_visible_local"), zone, site.Name);
+                // docs/api.md: the max_visible_* columns are now greatest_visible_*, the old names copied at the end for one release.
+                foreach (var column in new[] { "umbral_magnitude", "utc", "local", "altitude_deg" })
+                    Assert.Equal(csv.GetString("greatest_visible_" + column), csv.GetString("max_visible_" + column));
                 LocalIsUtcPlusOffset(csv.GetString("session_start_utc"), csv.GetString("session_start_local"), zone, site.Name);
                 Assert.Equal(entry.GetProperty("summary").GetString(), csv.GetString("summary"));
             }

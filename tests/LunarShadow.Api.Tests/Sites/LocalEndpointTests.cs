@@ -199,6 +199,13 @@ public class LocalEndpointTests(ApiFactory factory) : IClassFixture<ApiFactory>
         Assert.Equal(97, track.Count); // 16 hours every 10 minutes, both ends included
         Assert.All(track, t => Assert.Equal(5, t.GetProperty("horizonAltitudeDegrees").GetDouble(), 6));
         Assert.Contains(track, t => t.GetProperty("sunAltitudeDegrees").GetDouble() > 0);
+        // Explanatory Supplement (2013), ch. 15: day above −0°50′, then civil, nautical and astronomical twilight to −6°,
+        // −12° and −18°, night below. Each sample carries its state, so the page needs no copy of the thresholds (away from
+        // the limits, where the rounded altitude could fall on either side).
+        string Expected(double sun) => sun > -50.0 / 60 ? "day" : sun > -6 ? "civil-twilight" : sun > -12 ? "nautical-twilight" : sun > -18 ? "astronomical-twilight" : "night";
+        foreach (var t in track.Where(t => new[] { -50.0 / 60, -6, -12, -18 }.All(limit => Math.Abs(t.GetProperty("sunAltitudeDegrees").GetDouble() - limit) > 0.01)))
+            Assert.Equal(Expected(t.GetProperty("sunAltitudeDegrees").GetDouble()), t.GetProperty("sky").GetString());
+        Assert.Equal(5, track.Select(t => t.GetProperty("sky").GetString()).Distinct().Count());
         await JsonAssert.ProblemNaming(await _client.GetAsync("/api/v1/eclipses/2025-03-14/local?lat=40.7&lon=-74&track=1"), "track");
     }
 }

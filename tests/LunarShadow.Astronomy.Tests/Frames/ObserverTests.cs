@@ -27,6 +27,21 @@ public class ObserverTests
         Assert.Equal(180, h.Azimuth.Degrees, 9);
     }
 
+    // Meeus (1998), Example 13.b: Venus from Washington, H = 64.352133°, δ = −6°43′11.61″, φ = +38°55′17″ →
+    // A = 68.0337° from the south (248.0337° from the north), h = 15.1249°.
+    [Fact]
+    public void Altitude_and_azimuth_match_Meeus_example_13b()
+    {
+        var h = HorizontalCoordinates.FromHourAngle(Angle.FromDegrees(64.352133), Angle.FromDegrees(-(6 + 43 / 60.0 + 11.61 / 3600)), Angle.FromDegrees(38 + 55 / 60.0 + 17 / 3600.0));
+        Assert.Equal(15.1249, h.Altitude.Degrees, 1e-4);
+        Assert.Equal(248.0337, h.Azimuth.Degrees, 1e-4);
+        // The local components (north, east, up) of the same direction give the same place: the one home both paths use.
+        var back = h.LocalUnitVector();
+        var again = HorizontalCoordinates.FromLocalComponents(back.X * 3, back.Y * 3, back.Z * 3);
+        Assert.Equal(h.Altitude.Degrees, again.Altitude.Degrees, 1e-12);
+        Assert.Equal(h.Azimuth.Degrees, again.Azimuth.Degrees, 1e-12);
+    }
+
     // NIMA TR8350.2 (WGS84): a = 6378.137 km; b = a(1 − f) = 6356.752 km.
     [Fact]
     public void Poles_and_equator_lie_on_the_WGS84_ellipsoid()

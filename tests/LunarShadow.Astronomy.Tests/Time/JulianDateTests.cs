@@ -1,4 +1,5 @@
 using LunarShadow.Astronomy.Time;
+using NodaTime;
 
 namespace LunarShadow.Astronomy.Tests.Time;
 
@@ -70,5 +71,31 @@ public class JulianDateTests
     {
         Assert.Equal("-0584-05-28", new JulianDate(1507900.13).ToCalendar().ToIsoDateString());
         Assert.Equal("2000-01-01", JulianDate.J2000.ToCalendar().ToIsoDateString());
+    }
+
+    // Meeus (1998), ch. 7: JD 2451545.0 is 2000 January 1, 12h; Example 7.a: 1957 October 4.81 is JD 2436116.31
+    // (19:26:24); eq. 7.1 gives JD 2440587.5 for 1970 January 1, 0h, the Unix epoch. Read as Julian dates of UTC.
+    [Theory]
+    [InlineData(2451545.0, 2000, 1, 1, 12, 0, 0)]
+    [InlineData(2436116.31, 1957, 10, 4, 19, 26, 24)]
+    [InlineData(2440587.5, 1970, 1, 1, 0, 0, 0)]
+    public void A_julian_date_of_UTC_names_the_instant_of_its_calendar_date(double day, int year, int month, int dayOfMonth, int hour, int minute, int second)
+    {
+        var expected = Instant.FromUtc(year, month, dayOfMonth, hour, minute, second);
+        Assert.True(Math.Abs((new JulianDate(day).ToUtcInstant() - expected).TotalMilliseconds) < 0.1);
+        Assert.Equal(day, JulianDate.OfUtc(expected).Day, 9);
+    }
+
+    // The conversion and its inverse agree to well under a millisecond (the double's resolution) over the supported years (−1999 to +3000).
+    [Fact]
+    public void Julian_date_and_UTC_instant_convert_back_and_forth_within_the_doubles_resolution()
+    {
+        var random = new Random(12);
+        for (var i = 0; i < 1000; i++)
+        {
+            var days = SupportedRange.Start.Day - 2440587.5 + random.NextDouble() * (SupportedRange.End.Day - SupportedRange.Start.Day);
+            var instant = Instant.FromUnixTimeTicks((long)(days * NodaConstants.TicksPerDay));
+            Assert.True(Math.Abs((JulianDate.OfUtc(instant).ToUtcInstant() - instant).TotalMilliseconds) < 0.1);
+        }
     }
 }

@@ -4,11 +4,12 @@ import { el, reset, widthOf, textWidth, stackInRows, spreadInRow } from './svg.j
 import { drawTimeAxis } from './axis.js';
 import { offsetLookup } from './time.js';
 
-export const SKY = [
-  [-0.83, '#5a6fa8', 'day'], [-6, '#3a4a80', 'civil twilight'], [-12, '#26315e', 'nautical twilight'],
-  [-18, '#182044', 'astronomical twilight'], [-91, '#0b1026', 'night'],
-];
-export const skyColour = (sun) => SKY.find(([limit]) => sun > limit)?.[1] ?? SKY[SKY.length - 1][1];
+// Colours of the sky states; the service classifies each sample (the track point's `sky`), so the page holds no
+// copy of the twilight thresholds.
+export const SKY = {
+  day: '#5a6fa8', 'civil-twilight': '#3a4a80', 'nautical-twilight': '#26315e', 'astronomical-twilight': '#182044', night: '#0b1026',
+};
+export const skyColour = (state) => SKY[state] ?? SKY.night;
 // Okabe & Ito (2008) colour-universal palette: sky blue, orange, vermillion; the opening hours in its yellow.
 export const PHASE = { penumbral: '#56B4E9', partial: '#E69F00', total: '#D55E00' };
 export const OPEN = '#F0E442';
@@ -61,7 +62,7 @@ export function drawTimeline(svg, local, eclipse) {
     const a = Math.max(t0, i === 0 ? t0 : (ms(track[i - 1].utc) + ms(track[i].utc)) / 2);
     const b = Math.min(t1, i === track.length - 1 ? t1 : (ms(track[i].utc) + ms(track[i + 1].utc)) / 2);
     if (b <= a) continue;
-    svg.appendChild(el('rect', { x: x(a), y: top, width: x(b) - x(a) + 0.6, height: plotHeight, fill: skyColour(track[i].sunAltitudeDegrees), class: 'sky' }));
+    svg.appendChild(el('rect', { x: x(a), y: top, width: x(b) - x(a) + 0.6, height: plotHeight, fill: skyColour(track[i].sky), class: 'sky' }));
   }
   // Below the horizon: the ground, shaded and hatched, so the Moon's path there is shown, not hidden.
   const ground = track.map((p) => `${x(Math.min(Math.max(ms(p.utc), t0), t1))},${y(p.horizonAltitudeDegrees)}`);
