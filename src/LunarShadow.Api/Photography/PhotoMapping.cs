@@ -39,7 +39,7 @@ internal static class PhotoMapping
                 new TimeLapseResponse(s.TimeLapseIntervalSeconds, s.TimeLapseFrames, TimeFormats.Round(s.TimeLapseMinutes, 1),
                     TimeFormats.Round(s.TimeLapsePlaybackSeconds, 1), TimeFormats.Round(s.TimeLapseStorageGigabytes, 2))),
             plan.Cautions,
-            plan.Notes.Select(n => new PlanNoteResponse(PhotoWarningText.Code(n.Code), PhotoWarningText.NoteSentence(n, zone),
+            plan.Notes.Select(n => new PlanNoteResponse(WireNames.Of(n.Code), PhotoWarningText.NoteSentence(n, zone),
                 TimeFormats.Utc(n.FromUtc), TimeFormats.Utc(n.ToUtc), TimeFormats.Local(n.FromUtc, zone).Text, TimeFormats.Local(n.ToUtc, zone).Text,
                 n.FirstRow, n.Rows, n.Numbers.ToDictionary(x => x.Key, x => TimeFormats.Round(x.Value, 4)))).ToList());
     }

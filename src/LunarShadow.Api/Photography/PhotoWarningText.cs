@@ -41,7 +41,7 @@ internal static class PhotoWarningText
         return note.Code switch
         {
             PhotoWarningCode.IsoChanged => F($"{span}: ISO {(N("lowestIso") > N("fromIso") ? "raised" : "lowered")} from {N("fromIso"):0} to {IsoRange(N("lowestIso"), N("highestIso"))} to keep the shutter in the camera's range."),
-            _ => F($"{span}: {Code(note.Code)}."),
+            _ => F($"{span}: {WireNames.Of(note.Code)}."),
         };
     }
 
