@@ -6,13 +6,17 @@ namespace LunarShadow.Api.Hosting;
 /// <summary>Per-client limits, from configuration section "RateLimiting".</summary>
 internal sealed class RateLimitOptions
 {
-    /// <summary>Requests a client may make per second, sustained (default 50).</summary>
-    public int PermitsPerSecond { get; set; } = 50;
+    /// <summary>Requests a client may make per second, sustained (default 50; a fraction for less than one a second).</summary>
+    public double PermitsPerSecond { get; set; } = 50;
 
     /// <summary>Requests a client may make in a burst (default 200).</summary>
     public int Burst { get; set; } = 200;
 
-    /// <summary>How often the bucket is refilled, in seconds (default 1), with PermitsPerSecond for each second.</summary>
+    /// <summary>
+    /// The bucket's refill period, in seconds (default 1): PermitsPerSecond for each second, rounded to whole tokens (at
+    /// least 1). Within a partitioned limiter the tokens flow in continuously at that rate, not in steps, so a slow test
+    /// that must see no refill sets a rate of one token an hour (PermitsPerSecond 1/3600, ReplenishmentSeconds 3600).
+    /// </summary>
     public int ReplenishmentSeconds { get; set; } = 1;
 
     /// <summary>Expensive requests (searches, catalogue ranges, batches) one client may have running at once (default 1).</summary>
@@ -79,7 +83,7 @@ internal static class RateLimiting
                     ? RateLimitPartition.GetTokenBucketLimiter(ClientKey(context), _ => new TokenBucketRateLimiterOptions
                     {
                         TokenLimit = Math.Max(1, options.Burst),
-                        TokensPerPeriod = Math.Max(1, options.PermitsPerSecond) * Math.Max(1, options.ReplenishmentSeconds),
+                        TokensPerPeriod = Math.Max(1, (int)Math.Round(options.PermitsPerSecond * Math.Max(1, options.ReplenishmentSeconds))),
                         ReplenishmentPeriod = TimeSpan.FromSeconds(Math.Max(1, options.ReplenishmentSeconds)),
                         QueueLimit = 0,
                         AutoReplenishment = true,
@@ -119,7 +123,7 @@ internal static class RateLimiting
         response.Headers.RetryAfter = retryAfter.ToString(CultureInfo.InvariantCulture);
         response.Headers.CacheControl = "no-store";
         await Results.Problem(
-            detail: $"Too many requests from this client: at most {options.PermitsPerSecond} per second (bursts of {options.Burst}), and at most {options.ExpensivePerClient} search, catalogue range, map or batch at a time ({options.ExpensiveQueuePerClient} waiting). Retry after {retryAfter} s.",
+            detail: FormattableString.Invariant($"Too many requests from this client: at most {options.PermitsPerSecond} per second (bursts of {options.Burst}), and at most {options.ExpensivePerClient} search, catalogue range, map or batch at a time ({options.ExpensiveQueuePerClient} waiting). Retry after {retryAfter} s."),
             statusCode: StatusCodes.Status429TooManyRequests, title: "Too many requests.",
             type: "https://lunarshadow.invalid/problems/too-many-requests").ExecuteAsync(context);
     }
