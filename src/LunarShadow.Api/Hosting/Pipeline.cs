@@ -26,13 +26,15 @@ internal static class Pipeline
         app.UseStatusCodePages();
         app.UseMiddleware<ResponseHeadersMiddleware>();
         app.UsePublicReadCors();
-        // The deadline wraps the limiter (a wait for a turn counts against it) and everything that may buffer, tag or
+        // The deadline wraps the limiters (a wait for a turn counts against it) and everything that may buffer, tag or
         // cache a body, so that nothing is tagged or kept from a request that did not finish.
         app.UseMiddleware<RequestDeadlineMiddleware>();
-        app.UseRateLimiter();
+        app.UseRateLimiter(); // per-client token bucket: every API request, stored answers included
         app.UseMiddleware<EntityTagMiddleware>();
         app.UseResponseCompression();
         app.UseOutputCache();
+        // Only requests the output cache could not answer wait for a turn at the expensive work.
+        app.UseMiddleware<ExpensiveWorkMiddleware>();
         return app;
     }
 

@@ -16,7 +16,10 @@ internal static class ServiceRegistration
             .Enrich.FromLogContext(), preserveStaticLogger: true);
         builder.Services.AddSingleton<NodaTime.IClock>(NodaTime.SystemClock.Instance);
         builder.Services.AddLunarShadowForwardedHeaders(builder.Configuration);
-        builder.Services.AddSingleton<LunarShadow.Astronomy.Eclipses.EclipseFinders>(); // the eclipse caches, one set per host
+        // The eclipse caches, one set per host; a range search splits its work over at most ThreadsPerSearch threads.
+        var searchThreads = Math.Max(1, RateLimiting.Options(builder.Configuration).ThreadsPerSearch);
+        builder.Services.AddSingleton(new LunarShadow.Astronomy.Eclipses.EclipseFinders(model =>
+            LunarShadow.Astronomy.Eclipses.EclipseFinder.OnEmbeddedEphemerides(model, searchThreads)));
         builder.Services.AddObservationStorage(builder.Configuration);
         builder.Services.AddObservationReading();
         builder.Services.AddLunarShadowRateLimiting(builder.Configuration);

@@ -8,7 +8,13 @@ namespace LunarShadow.Api.Sites;
 /// <param name="Count">Number of eclipses found.</param>
 /// <param name="Eclipses">The eclipses, in time order.</param>
 /// <param name="Note">Why fewer were found than asked for, if so.</param>
-public sealed record UpcomingResponse(SiteEcho Site, UpcomingCriteriaEcho Criteria, int Count, IReadOnlyList<UpcomingItem> Eclipses, string? Note);
+/// <param name="SearchedUntil">The UTC date the search stopped before: the year limit, or the end of the supported range.</param>
+/// <param name="SearchLimitReached">
+/// True when fewer eclipses than asked for were found because the search stopped at its year limit: later eclipses may
+/// still qualify (ask for more years). False when count was reached or the search ran to the end of the supported range.
+/// </param>
+public sealed record UpcomingResponse(SiteEcho Site, UpcomingCriteriaEcho Criteria, int Count, IReadOnlyList<UpcomingItem> Eclipses, string? Note,
+    string SearchedUntil, bool SearchLimitReached);
 
 /// <summary>The criteria as understood.</summary>
 /// <param name="From">First date searched.</param>
@@ -18,7 +24,9 @@ public sealed record UpcomingResponse(SiteEcho Site, UpcomingCriteriaEcho Criter
 /// <param name="MinAltitudeDegrees">Least altitude of the Moon's upper limb that counts, degrees.</param>
 /// <param name="Open">Opening hours that count, if given.</param>
 /// <param name="ShadowModel">Shadow model used.</param>
-public sealed record UpcomingCriteriaEcho(string From, int Count, string Phase, bool AstronomicalNightOnly, double MinAltitudeDegrees, string? Open, string ShadowModel);
+/// <param name="Years">How many years from From were searched at most.</param>
+public sealed record UpcomingCriteriaEcho(string From, int Count, string Phase, bool AstronomicalNightOnly, double MinAltitudeDegrees, string? Open, string ShadowModel,
+    int Years);
 
 /// <summary>One eclipse the site can see.</summary>
 /// <param name="Date">UTC date of greatest eclipse (the eclipse's id).</param>

@@ -22,6 +22,12 @@ internal static class UpcomingEndpoints
         Unit = "eclipses", Minimum = 1, Maximum = MaxCount, Default = 10.0,
     };
 
+    public static readonly Parameter Years = new("years", ParameterType.Integer,
+        "How many years from `from` to search. The search stops there even when fewer than count eclipses were found, and the response says so (searchLimitReached); ask for more years to look further.")
+    {
+        Unit = "years", Minimum = 1, Maximum = UpcomingEclipses.MaxYearsAhead, Default = (double)UpcomingEclipses.DefaultYearsAhead,
+    };
+
     public static readonly Parameter Phase = new("phase", ParameterType.Choice,
         "Least phase that must be visible: penumbral, partial (partial or total) or total.")
     {
@@ -39,9 +45,9 @@ internal static class UpcomingEndpoints
         routes.MapGet("/api/v1/sites/upcoming", Get)
             .WithTags("Sites")
             .WithName("ListUpcomingVisibleEclipses")
-            .Takes(new EndpointParameters([.. Parameters.Site, From, Count, Phase, Night, .. Parameters.Model, Formats.Parameter]))
+            .Takes(new EndpointParameters([.. Parameters.Site, From, Count, Years, Phase, Night, .. Parameters.Model, Formats.Parameter]))
             .WithSummary("The next eclipses a site can see")
-            .WithDescription("The next count (up to 50) eclipses from a date of which at least the chosen phase is visible above the horizon profile and minimum altitude, optionally only during astronomical night and within opening hours. JSON, CSV or iCalendar (a subscription feed).")
+            .WithDescription("The next count (up to 50) eclipses, searched for over the given years (100 unless asked for more, up to 1000) from a date, of which at least the chosen phase is visible above the horizon profile and minimum altitude, optionally only during astronomical night and within opening hours. JSON, CSV or iCalendar (a subscription feed).")
             .Produces<UpcomingResponse>(StatusCodes.Status200OK, "application/json", "text/csv", "text/calendar")
             .ProducesValidationProblem()
             .ProducesProblem(StatusCodes.Status406NotAcceptable);
@@ -54,6 +60,7 @@ internal static class UpcomingEndpoints
         var site = SiteParameters.Read(f);
         var start = f.Has(From) ? f.Date(From) : Today(clock);
         var wanted = f.Integer(Count)!.Value;
+        var years = f.Integer(Years)!.Value;
         var phaseName = f.Choice(Phase)!;
         var nightOnly = f.Boolean(Night);
         var (model, time) = ModelChoice.Read(f);
@@ -65,16 +72,19 @@ internal static class UpcomingEndpoints
         var criteria = new UpcomingCriteria(Enum.GetValues<EclipsePhase>().First(p => WireNames.Of(p) == phaseName), nightOnly, null, site.Hours);
         var startTt = TtInstant.FromJulianDate(start.Value.ToJulianDate().Day);
         var aborted = request.HttpContext.RequestAborted;
-        // Stops at the request's deadline or when the client goes away (checked per eclipse scanned).
-        var found = UpcomingEclipses.From(request.FinderFor(model), site.Site, time, startTt, criteria, aborted).Take(wanted).ToList();
+        // Stops at the request's deadline or when the client goes away (checked per eclipse scanned), and at the year limit.
+        var search = UpcomingEclipses.Search(request.FinderFor(model), site.Site, time, startTt, criteria, wanted, years, aborted);
+        var found = search.Found;
         var items = found.Select(u => Item(u, site.Site, time)).ToList();
-        var note = items.Count < wanted
-            ? $"Only {items.Count} such eclipses in the {UpcomingEclipses.MaxYearsAhead} years searched (or up to the year {SupportedRange.LastYear})."
-            : null;
+        var searchedUntil = search.SearchedUntil.JulianDate.ToCalendar().ToIsoDateString();
+        var note = items.Count >= wanted ? null
+            : search.StoppedAtYearLimit
+                ? $"Only {items.Count} such eclipses in the {years} years searched (before {searchedUntil}); later ones may qualify: ask for more years (up to {UpcomingEclipses.MaxYearsAhead})."
+                : $"Only {items.Count} such eclipses up to the end of the supported range (the year {SupportedRange.LastYear}).";
         var abbreviations = found.SelectMany(u => LocalDates.Abbreviations(u.Local.Outline.Night, site.Site.TimeZone)).Distinct().ToList();
         var response = new UpcomingResponse(LocalMapping.Echo(site.Site, abbreviations),
-            new UpcomingCriteriaEcho(start.Value.ToIsoDateString(), wanted, phaseName, criteria.AstronomicalNightOnly, site.Site.MinimumAltitude.Degrees, f.Raw(Parameters.Open)?.Trim(), model.Name),
-            items.Count, items, note);
+            new UpcomingCriteriaEcho(start.Value.ToIsoDateString(), wanted, phaseName, criteria.AstronomicalNightOnly, site.Site.MinimumAltitude.Degrees, f.Raw(Parameters.Open)?.Trim(), model.Name, years),
+            items.Count, items, note, searchedUntil, search.StoppedAtYearLimit);
 
         if (output == OutputFormat.Calendar)
         {

@@ -24,20 +24,66 @@ public sealed record UpcomingEclipse(LocalCircumstances Local, IReadOnlyList<Vis
     public double QualifyingMinutes => Qualifying.Sum(q => q.Minutes);
 }
 
+/// <summary>The outcome of a bounded search for the eclipses a site can see.</summary>
+/// <param name="Found">The eclipses found, in time order (at most the number asked for).</param>
+/// <param name="SearchedUntil">The end of the window searched (exclusive): the year limit, or the end of the supported range.</param>
+/// <param name="StoppedAtYearLimit">
+/// True when fewer eclipses than asked for were found and the search stopped at its year limit before the end of the
+/// supported range: later eclipses may still qualify. False when the count was reached or the whole range was searched.
+/// </param>
+public sealed record UpcomingSearch(IReadOnlyList<UpcomingEclipse> Found, TtInstant SearchedUntil, bool StoppedAtYearLimit);
+
 /// <summary>The next eclipses a site can see, by its own criteria.</summary>
 public static class UpcomingEclipses
 {
-    /// <summary>The longest look-ahead, in years.</summary>
+    /// <summary>How many years a search looks ahead unless asked for more.</summary>
+    public const int DefaultYearsAhead = 100;
+
+    /// <summary>The longest look-ahead one search may ask for, in years.</summary>
     public const int MaxYearsAhead = 1000;
 
     private static readonly Angle AstronomicalNightSun = SkyStates.AstronomicalTwilightEndAltitude;
 
-    /// <summary>Eclipses from <paramref name="from"/> on that the site can see, lazily, in time order; stops when cancelled.</summary>
+    /// <summary>
+    /// The end (exclusive) of a window of <paramref name="yearsAhead"/> calendar years from <paramref name="from"/> (the
+    /// same month, day and time that many years later), or the last day of the supported range when that comes first.
+    /// </summary>
+    public static TtInstant SearchEnd(TtInstant from, int yearsAhead)
+    {
+        ArgumentOutOfRangeException.ThrowIfLessThan(yearsAhead, 1);
+        ArgumentOutOfRangeException.ThrowIfGreaterThan(yearsAhead, MaxYearsAhead);
+        var start = from.JulianDate.ToCalendar();
+        var end = JulianDate.FromCalendar(start.Year + yearsAhead, start.Month, start.Day);
+        return TtInstant.FromJulianDate(Math.Min(end.Day, LastSearchDay));
+    }
+
+    private static double LastSearchDay => SupportedRange.End.Day - 1;
+
+    /// <summary>
+    /// Up to <paramref name="count"/> eclipses the site can see, searching at most <paramref name="yearsAhead"/> years from
+    /// <paramref name="from"/>; says whether the search stopped at that limit. Stops when cancelled (checked per eclipse).
+    /// </summary>
+    public static UpcomingSearch Search(EclipseFinder finder, Site site, TimeScaleConverter time, TtInstant from, UpcomingCriteria criteria,
+        int count, int yearsAhead, CancellationToken cancellationToken = default)
+    {
+        ArgumentOutOfRangeException.ThrowIfLessThan(count, 1);
+        var end = SearchEnd(from, yearsAhead);
+        var found = Within(finder, site, time, from, end, criteria, cancellationToken).Take(count).ToList();
+        return new UpcomingSearch(found, end, found.Count < count && end.JulianDate.Day < LastSearchDay);
+    }
+
+    /// <summary>
+    /// Eclipses from <paramref name="from"/> on that the site can see, lazily, in time order, up to
+    /// <see cref="MaxYearsAhead"/> years ahead; stops when cancelled.
+    /// </summary>
     public static IEnumerable<UpcomingEclipse> From(EclipseFinder finder, Site site, TimeScaleConverter time, TtInstant from, UpcomingCriteria criteria,
-        CancellationToken cancellationToken = default)
+        CancellationToken cancellationToken = default) =>
+        Within(finder, site, time, from, SearchEnd(from, MaxYearsAhead), criteria, cancellationToken);
+
+    private static IEnumerable<UpcomingEclipse> Within(EclipseFinder finder, Site site, TimeScaleConverter time, TtInstant from, TtInstant end,
+        UpcomingCriteria criteria, CancellationToken cancellationToken)
     {
         var effectiveSite = criteria.MinimumMoonAltitude is { } min && min > site.MinimumAltitude ? site with { MinimumAltitude = min } : site;
-        var end = TtInstant.FromJulianDate(Math.Min(from.JulianDate.Day + MaxYearsAhead * 365.25, SupportedRange.End.Day - 1));
         foreach (var eclipse in finder.Between(from, end, cancellationToken))
         {
             cancellationToken.ThrowIfCancellationRequested();

@@ -18,7 +18,7 @@ public class OpenApiDocumentTests(ApiFactory factory) : IClassFixture<ApiFactory
     [
         "lat", "lon", "elevation", "minAltitude", "pressure", "temperature", "layerKm", "deltaT", "track", "count", "iso", "aperture",
         "shutter", "focalLength", "teleconverter", "pixelPitch", "pixels", "danjonL", "interval", "bracket", "blur", "extinction", "gap",
-        "timelapseInterval", "fileSize",
+        "timelapseInterval", "fileSize", "years",
     ];
 
     private static readonly string[] ChoiceParameters = ["shadow", "deltaTModel", "format", "kind", "phase", "mount"];
@@ -68,6 +68,9 @@ public class OpenApiDocumentTests(ApiFactory factory) : IClassFixture<ApiFactory
         Assert.Equal(("-90", "90", true), (latitude.Schema!.Minimum, latitude.Schema.Maximum, latitude.Required));
         var count = Parameters(document).First(p => p.Parameter.Name == "count").Parameter.Schema!;
         Assert.Equal((JsonSchemaType.Integer, "1", "50", 10), (count.Type!.Value, count.Minimum, count.Maximum, (int)count.Default!));
+        // The upcoming search's year limit: 100 years unless asked for more, at most 1000 (docs/api.md).
+        var years = Parameters(document).First(p => p.Operation == "ListUpcomingVisibleEclipses" && p.Parameter.Name == "years").Parameter.Schema!;
+        Assert.Equal((JsonSchemaType.Integer, "1", "1000", 100), (years.Type!.Value, years.Minimum, years.Maximum, (int)years.Default!));
     }
 
     [Fact]

@@ -10,6 +10,7 @@ namespace LunarShadow.Api.Tests.Hosting;
 /// needed), answers on the container's port — liveness, readiness, the page and the API — and the Kubernetes manifest
 /// probes what the image serves.
 /// </summary>
+[Collection(LunarShadow.Api.Tests.Support.RunsAlone.Name)]
 public partial class ContainerTests
 {
 #if DEBUG

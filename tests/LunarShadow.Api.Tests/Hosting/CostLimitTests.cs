@@ -6,8 +6,9 @@ namespace LunarShadow.Api.Tests.Hosting;
 /// <summary>What one client can cost the service is bounded, not only how often it may ask.</summary>
 public class CostLimitTests
 {
-    // A search nothing satisfies, on a finder no other test warms (its own layer height): seconds of work.
-    private static string Hopeless(string layerKm) => $"/api/v1/sites/upcoming?lat=89.9&lon=0&from=-1999-01-01&phase=total&night=true&count=50&shadow=layer&layerKm={layerKm}";
+    // A search nothing satisfies over the longest scan allowed (1000 years), on a finder no other test warms (its own
+    // layer height): seconds of work.
+    private static string Hopeless(string layerKm) => $"/api/v1/sites/upcoming?lat=89.9&lon=0&from=-1999-01-01&years=1000&phase=total&night=true&count=50&shadow=layer&layerKm={layerKm}";
 
     [Fact]
     public async Task A_client_runs_one_expensive_request_at_a_time_while_its_cheap_requests_still_get_through()
@@ -34,13 +35,40 @@ public class CostLimitTests
     }
 
     [Fact]
+    public async Task A_stored_search_answer_is_served_at_once_even_while_the_client_has_a_search_running()
+    {
+        await using var factory = new WebApplicationFactory<Program>().WithWebHostBuilder(b =>
+        {
+            b.UseSetting("RateLimiting:PermitsPerSecond", "1000");
+            b.UseSetting("RateLimiting:Burst", "1000");
+            b.UseSetting("RateLimiting:ExpensivePerClient", "1");
+            b.UseSetting("RateLimiting:ExpensiveQueuePerClient", "0");
+            b.UseSetting("RequestTimeoutSeconds", "15");
+        });
+        var client = factory.CreateClient();
+        const string Stored = "/api/v1/sites/upcoming?lat=47.07&lon=15.44&from=2025-01-01&count=1";
+        Assert.Equal(HttpStatusCode.OK, (await client.GetAsync(Stored)).StatusCode);
+        var running = client.GetAsync(Hopeless("345.6"));
+        await Task.Delay(500);
+        // The client's one expensive turn is taken and it may not queue, yet the stored answer comes from the output
+        // cache (which answers before the concurrency limit), not a 429. RFC 9111 §5.1: a cache sends Age.
+        var again = await client.GetAsync(Stored);
+        Assert.Equal(HttpStatusCode.OK, again.StatusCode);
+        Assert.NotNull(again.Headers.Age);
+        // And a new search from the same client is still refused while the first runs (or has run to its deadline).
+        var other = await client.GetAsync(Hopeless("345.7"));
+        Assert.True(other.StatusCode == HttpStatusCode.TooManyRequests || running.IsCompleted, $"{(int)other.StatusCode}");
+        Assert.True((await running).StatusCode is HttpStatusCode.OK or HttpStatusCode.ServiceUnavailable);
+    }
+
+    [Fact]
     public async Task The_OpenAPI_document_is_built_once_and_counts_against_the_rate_limit()
     {
         await using var factory = new WebApplicationFactory<Program>().WithWebHostBuilder(b =>
         {
-            b.UseSetting("RateLimiting:PermitsPerSecond", "1");
+            b.UseSetting("RateLimiting:PermitsPerSecond", "0.000277778");
             b.UseSetting("RateLimiting:Burst", "2");
-            b.UseSetting("RateLimiting:ReplenishmentSeconds", "3600"); // no refill during the test
+            b.UseSetting("RateLimiting:ReplenishmentSeconds", "3600"); // one token an hour (it flows in continuously): no refill during the test, however slow the machine
         });
         var client = factory.CreateClient();
         var first = await client.GetAsync("/openapi/v1.json");

@@ -18,9 +18,9 @@ namespace LunarShadow.Api.Tests.Hosting;
 /// </summary>
 public class DeadlineTests
 {
-    // A search no site can satisfy within the scan (a polar site, total phase, astronomical night only, a 1° horizon
+    // A search no site can satisfy within the longest scan allowed (1000 years; a polar site, total phase, astronomical night only, a 1° horizon
     // all round of 360 points, and a layer height no other test uses, so the finder starts cold): seconds of work.
-    private static readonly string HopelessSearch = "/api/v1/sites/upcoming?lat=89.9&lon=0&from=-1999-01-01&phase=total&night=true&count=50&shadow=layer&layerKm=123.4&horizon="
+    private static readonly string HopelessSearch = "/api/v1/sites/upcoming?lat=89.9&lon=0&from=-1999-01-01&years=1000&phase=total&night=true&count=50&shadow=layer&layerKm=123.4&horizon="
         + string.Join(',', Enumerable.Range(0, 360).Select(a => $"{a}:1"));
 
     /// <summary>Test-only endpoints behind the whole pipeline: they write part of a body, then wait for cancellation.</summary>

@@ -29,9 +29,9 @@ public class ForwardedHeadersTests
 
     private static WebApplicationFactory<Program> Host(Action<IWebHostBuilder> configure) => new WebApplicationFactory<Program>().WithWebHostBuilder(b =>
     {
-        b.UseSetting("RateLimiting:PermitsPerSecond", "1");
+        b.UseSetting("RateLimiting:PermitsPerSecond", "0.000277778");
         b.UseSetting("RateLimiting:Burst", "2");
-        b.UseSetting("RateLimiting:ReplenishmentSeconds", "3600"); // no refill during the test, however slow the machine
+        b.UseSetting("RateLimiting:ReplenishmentSeconds", "3600"); // one token an hour (it flows in continuously): no refill during the test, however slow the machine
         configure(b);
     });
 

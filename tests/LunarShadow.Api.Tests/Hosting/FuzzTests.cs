@@ -36,7 +36,7 @@ public class FuzzTests
         ("/api/v1/eclipses", ["from", "to", "kind", "shadow", "layerKm", "deltaT", "deltaTModel", "format"]),
         ("/api/v1/eclipses/{date}", ["shadow", "layerKm", "deltaT", "deltaTModel", "format"]),
         ("/api/v1/eclipses/{date}/local", ["lat", "lon", "elevation", "tz", "minAltitude", "horizon", "pressure", "temperature", "name", "open", "shadow", "deltaT", "format"]),
-        ("/api/v1/sites/upcoming", ["lat", "lon", "tz", "from", "count", "phase", "night", "open", "minAltitude", "pressure", "temperature", "horizon", "format"]),
+        ("/api/v1/sites/upcoming", ["lat", "lon", "tz", "from", "count", "years", "phase", "night", "open", "minAltitude", "pressure", "temperature", "horizon", "format"]),
         ("/api/v1/eclipses/{date}/photo-plan", ["lat", "lon", "tz", "iso", "aperture", "shutter", "focalLength", "teleconverter", "sensor", "pixelPitch", "pixels", "mount", "danjon", "danjonL", "shadow", "pressure", "temperature", "interval", "bracket", "blur", "extinction", "gap", "timelapseInterval", "fileSize", "start", "format"]),
         ("/api/v1/eclipses/{date}/visibility-map", ["shadow", "deltaT", "format"]),
         ("/api/v1/eclipses/{date}/observations", ["kind", "format"]),

@@ -166,6 +166,9 @@ public class LocalEndpointTests(ApiFactory factory) : IClassFixture<ApiFactory>
     [InlineData("/api/v1/sites/upcoming?lat=0&lon=0&phase=annular", "phase")]
     [InlineData("/api/v1/sites/upcoming?lat=0&lon=0&night=maybe", "night")]
     [InlineData("/api/v1/sites/upcoming?lat=0&lon=0&from=3000-06-01", "from")]
+    [InlineData("/api/v1/sites/upcoming?lat=0&lon=0&years=0", "years")]
+    [InlineData("/api/v1/sites/upcoming?lat=0&lon=0&years=1001", "years")]
+    [InlineData("/api/v1/sites/upcoming?lat=0&lon=0&years=2.5", "years")]
     public async Task Bad_site_input_gets_a_problem_naming_the_field(string url, string field)
     {
         await JsonAssert.ProblemNaming(await _client.GetAsync(url), field);
@@ -189,6 +192,34 @@ public class LocalEndpointTests(ApiFactory factory) : IClassFixture<ApiFactory>
         Assert.All(u.GetProperty("eclipses").EnumerateArray(), e => Assert.True(e.GetProperty("qualifyingMinutes").GetDouble() > 0));
         var ics = await _client.GetAsync("/api/v1/sites/upcoming?lat=40.7&lon=-74&from=2025-01-01&count=3&phase=total&format=ics");
         Assert.Equal("text/calendar", ics.Content.Headers.ContentType?.MediaType);
+        // The count was reached well inside the default 100 years: no limit to report.
+        Assert.Equal(100, u.GetProperty("criteria").GetProperty("years").GetInt32());
+        Assert.Equal("2125-01-01", u.GetProperty("searchedUntil").GetString());
+        Assert.False(u.GetProperty("searchLimitReached").GetBoolean());
+    }
+
+    // Same source as above: from New York the total eclipses of 2025 and 2026 are seen, and none falls in between or
+    // later in 2026, so two years hold exactly two.
+    [Fact]
+    public async Task Upcoming_says_when_its_search_stopped_at_the_year_limit_so_none_found_is_not_none_exist()
+    {
+        var u = await JsonAssert.OkJson(await _client.GetAsync("/api/v1/sites/upcoming?lat=40.7&lon=-74&from=2025-01-01&count=5&phase=total&years=2"));
+        Assert.Equal(["2025-03-14", "2026-03-03"], u.GetProperty("eclipses").EnumerateArray().Select(e => e.GetProperty("date").GetString()));
+        Assert.Equal(2, u.GetProperty("criteria").GetProperty("years").GetInt32());
+        Assert.Equal("2027-01-01", u.GetProperty("searchedUntil").GetString());
+        Assert.True(u.GetProperty("searchLimitReached").GetBoolean());
+        Assert.Contains("ask for more years", u.GetProperty("note").GetString(), StringComparison.Ordinal);
+    }
+
+    // The supported range ends with the year 3000 (docs/accuracy.md): a search that runs into it has searched everything.
+    [Fact]
+    public async Task Upcoming_that_runs_to_the_end_of_the_supported_range_does_not_claim_a_limit()
+    {
+        var u = await JsonAssert.OkJson(await _client.GetAsync("/api/v1/sites/upcoming?lat=40.7&lon=-74&from=2990-01-01&count=50&phase=total"));
+        Assert.True(u.GetProperty("count").GetInt32() < 50);
+        Assert.Equal("3000-12-31", u.GetProperty("searchedUntil").GetString());
+        Assert.False(u.GetProperty("searchLimitReached").GetBoolean());
+        Assert.Contains("end of the supported range", u.GetProperty("note").GetString(), StringComparison.Ordinal);
     }
 
     [Fact]
