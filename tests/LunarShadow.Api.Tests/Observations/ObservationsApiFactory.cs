@@ -1,4 +1,5 @@
 using LunarShadow.Api.Observations;
+using LunarShadow.Api.Tests.Support;
 using Microsoft.AspNetCore.Hosting;
 using Microsoft.AspNetCore.Mvc.Testing;
 using Microsoft.AspNetCore.TestHost;
@@ -13,13 +14,7 @@ public sealed class ObservationsApiFactory : WebApplicationFactory<Program>
 
     protected override void ConfigureWebHost(IWebHostBuilder builder)
     {
-        builder.UseSetting("RateLimiting:PermitsPerSecond", "1000000");
-        builder.UseSetting("RateLimiting:Burst", "1000000");
-        builder.UseSetting("RateLimiting:ExpensivePerClient", "64");
-        builder.UseSetting("RateLimiting:ExpensiveQueuePerClient", "100000");
-        builder.UseSetting("RateLimiting:ExpensiveTotal", "64");
-        builder.UseSetting("RateLimiting:ExpensiveQueueTotal", "100000");
-        builder.UseSetting("RequestTimeoutSeconds", "300");
+        UnthrottledApiFactory.RaiseLimits(builder);
         builder.ConfigureTestServices(services => services.AddSingleton<IObservationReader>(Log));
     }
 }

@@ -6,7 +6,10 @@ namespace LunarShadow.Api.Tests.Support;
 /// <summary>An in-memory host whose rate limit is raised, for tests that walk many eclipses and sites.</summary>
 public sealed class UnthrottledApiFactory : WebApplicationFactory<Program>
 {
-    protected override void ConfigureWebHost(IWebHostBuilder builder)
+    protected override void ConfigureWebHost(IWebHostBuilder builder) => RaiseLimits(builder);
+
+    /// <summary>Raises the rate and cost limits and the request deadline far above anything a test sends.</summary>
+    public static void RaiseLimits(IWebHostBuilder builder)
     {
         builder.UseSetting("RateLimiting:PermitsPerSecond", "1000000");
         builder.UseSetting("RateLimiting:Burst", "1000000");
