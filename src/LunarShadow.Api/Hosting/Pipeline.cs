@@ -20,6 +20,7 @@ internal static class Pipeline
     public static WebApplication UseLunarShadowPipeline(this WebApplication app)
     {
         app.UseLunarShadowForwardedHeaders();
+        app.UseMiddleware<RequestsInFlightMiddleware>();
         app.UseMiddleware<CorrelationIdMiddleware>();
         app.UseSerilogRequestLogging();
         app.UseExceptionHandler();

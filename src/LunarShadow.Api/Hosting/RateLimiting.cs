@@ -40,6 +40,13 @@ internal sealed class RateLimitOptions
     /// </summary>
     public int ThreadsPerSearch { get; set; } = Math.Max(1, Environment.ProcessorCount - 1);
 
+    /// <summary>
+    /// Threads one eclipse search may use while it is the only request the service is working on (default: the
+    /// processor count). The search asks again every 128 lunations, so it falls back to <see cref="ThreadsPerSearch"/>
+    /// within milliseconds of another request arriving.
+    /// </summary>
+    public int ThreadsPerSearchWhenAlone { get; set; } = Environment.ProcessorCount;
+
     /// <summary>Observation writes one key (or, without a key, one client) may make per minute, sustained (default 60).</summary>
     public int WritesPerMinute { get; set; } = 60;
 

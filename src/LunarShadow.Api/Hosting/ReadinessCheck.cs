@@ -12,10 +12,10 @@ using Microsoft.Extensions.Options;
 namespace LunarShadow.Api.Hosting;
 
 /// <summary>
-/// Ready once the embedded tables load and evaluate, the computing path has run once, and the page's files are there to
-/// serve.
+/// Ready once the embedded tables load and evaluate, the computing path has run once, one request has gone through the
+/// whole pipeline (<see cref="PipelineWarmUp"/>), and the page's files are there to serve.
 /// </summary>
-internal sealed class ReadinessCheck(IWebHostEnvironment environment, IOptions<Microsoft.AspNetCore.Http.Json.JsonOptions> json) : IHealthCheck
+internal sealed class ReadinessCheck(IWebHostEnvironment environment, IOptions<Microsoft.AspNetCore.Http.Json.JsonOptions> json, PipelineWarmUp pipeline) : IHealthCheck
 {
     /// <summary>The files the page cannot work without, relative to wwwroot.</summary>
     public static readonly string[] PageFiles = ["index.html", "embed.html", "styles.css", "js/app.js", "js/api.js", "js/embed.js"];
@@ -23,24 +23,25 @@ internal sealed class ReadinessCheck(IWebHostEnvironment environment, IOptions<M
     // Run once per process, whoever asks first; the others wait for it.
     private static Lazy<bool>? _warmedUp;
 
-    public Task<HealthCheckResult> CheckHealthAsync(HealthCheckContext context, CancellationToken cancellationToken = default)
+    public async Task<HealthCheckResult> CheckHealthAsync(HealthCheckContext context, CancellationToken cancellationToken = default)
     {
         var missing = PageFiles.Where(f => !environment.WebRootFileProvider.GetFileInfo(f).Exists).ToList();
         if (missing.Count > 0)
-            return Task.FromResult(HealthCheckResult.Unhealthy("the page's files are missing from wwwroot: " + string.Join(", ", missing)));
+            return HealthCheckResult.Unhealthy("the page's files are missing from wwwroot: " + string.Join(", ", missing));
         try
         {
             var moon = LunarTheory.Truncated.GeocentricState(TtInstant.FromJulianDate(2451545.0)).PositionKm.Length;
-            if (moon is not (> 350_000 and < 410_000)) return Task.FromResult(HealthCheckResult.Unhealthy("the lunar series gave an impossible distance"));
+            if (moon is not (> 350_000 and < 410_000)) return HealthCheckResult.Unhealthy("the lunar series gave an impossible distance");
             var options = json.Value.SerializerOptions;
             if (!LazyInitializer.EnsureInitialized(ref _warmedUp, () => new Lazy<bool>(() => WarmUp(options))).Value)
-                return Task.FromResult(HealthCheckResult.Unhealthy("the eclipse of 2000 January 21 was not found"));
-            return Task.FromResult(HealthCheckResult.Healthy($"ephemeris data {EmbeddedDataSet.VersionTag} loaded"));
+                return HealthCheckResult.Unhealthy("the eclipse of 2000 January 21 was not found");
         }
         catch (InvalidOperationException e)
         {
-            return Task.FromResult(HealthCheckResult.Unhealthy("embedded data missing", e));
+            return HealthCheckResult.Unhealthy("embedded data missing", e);
         }
+        await pipeline.RunOnceAsync().WaitAsync(cancellationToken);
+        return HealthCheckResult.Healthy($"ephemeris data {EmbeddedDataSet.VersionTag} loaded");
     }
 
     // Loads the tables every computation reads (screening and full series, ΔT) and takes one eclipse through search,

@@ -16,14 +16,17 @@ internal static class ServiceRegistration
             .Enrich.FromLogContext(), preserveStaticLogger: true);
         builder.Services.AddSingleton<NodaTime.IClock>(NodaTime.SystemClock.Instance);
         builder.Services.AddLunarShadowForwardedHeaders(builder.Configuration);
-        // The eclipse caches, one set per host; a range search splits its work over at most ThreadsPerSearch threads.
-        var searchThreads = Math.Max(1, RateLimiting.Options(builder.Configuration).ThreadsPerSearch);
+        // The eclipse caches, one set per host; a range search splits its work over every core the options allow while it is
+        // the only request, and over ThreadsPerSearch as soon as another request is in flight.
+        var inFlight = new RequestsInFlight(RateLimiting.Options(builder.Configuration));
+        builder.Services.AddSingleton(inFlight);
         builder.Services.AddSingleton(new LunarShadow.Astronomy.Eclipses.EclipseFinders(model =>
-            LunarShadow.Astronomy.Eclipses.EclipseFinder.OnEmbeddedEphemerides(model, searchThreads)));
+            LunarShadow.Astronomy.Eclipses.EclipseFinder.OnEmbeddedEphemerides(model, inFlight.ThreadsForNextSearchStep)));
         builder.Services.AddObservationStorage(builder.Configuration);
         builder.Services.AddObservationReading();
         builder.Services.AddLunarShadowRateLimiting(builder.Configuration);
         builder.Services.AddPublicReadCors();
+        builder.Services.AddSingleton<PipelineWarmUp>();
         builder.Services.AddHealthChecks().AddCheck<ReadinessCheck>("ephemeris", tags: ["ready"]);
         builder.Services.AddResponseCompression(options =>
         {

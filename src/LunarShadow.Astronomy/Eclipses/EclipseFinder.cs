@@ -19,8 +19,8 @@ public sealed class EclipseFinder
     // Meeus (1998), ch. 54: no lunar eclipse when |sin F| > 0.36 at the mean full Moon; 0.45 keeps a wide margin.
     private const double SinArgumentOfLatitudeLimit = 0.45;
 
-    // Lunations per step of a range search: each step's full Moons are solved on all allowed cores, then read in order.
-    private const int LunationsPerStep = 64;
+    /// <summary>Lunations per step of a range search: each step's full Moons are solved on the threads allowed, then read in order.</summary>
+    public const int LunationsPerStep = 128;
 
     // Lunations in one Saros.
     private const long SarosLunations = 223;
@@ -31,7 +31,7 @@ public sealed class EclipseFinder
 
     private readonly ApparentPlaceCalculator _accurate;
     private readonly ApparentPlaceCalculator _screening;
-    private readonly int _maxParallelism;
+    private readonly Func<int> _threadsForNextStep;
 
     // Per lunation, the solved passage without its Saros member (null: not eclipsed); what IsEclipsed reads.
     private readonly ConcurrentDictionary<long, Lazy<EclipseSolution?>> _solved = new();
@@ -49,17 +49,41 @@ public sealed class EclipseFinder
     /// <param name="screening">A cheaper ephemeris for screening full Moons (good to some 20″).</param>
     /// <param name="maxParallelism">Most threads one range search uses (default: the processor count; 1 for none).</param>
     public EclipseFinder(ShadowModel model, ApparentPlaceCalculator accurate, ApparentPlaceCalculator screening, int? maxParallelism = null)
+        : this(model, accurate, screening, Fixed(maxParallelism ?? Environment.ProcessorCount))
     {
-        ArgumentOutOfRangeException.ThrowIfLessThan(maxParallelism ?? 1, 1, nameof(maxParallelism));
+    }
+
+    /// <summary>
+    /// A finder whose range searches ask, before each step of <see cref="LunationsPerStep"/> lunations, how many threads
+    /// that step may use (values below 1 count as 1): a host can lend a search every core while nothing else runs and
+    /// take them back as soon as other work arrives.
+    /// </summary>
+    /// <param name="model">The shadow model.</param>
+    /// <param name="accurate">The ephemeris the eclipses are solved on.</param>
+    /// <param name="screening">A cheaper ephemeris for screening full Moons (good to some 20″).</param>
+    /// <param name="threadsForNextStep">Asked once per step of a range search; called from the searching thread.</param>
+    public EclipseFinder(ShadowModel model, ApparentPlaceCalculator accurate, ApparentPlaceCalculator screening, Func<int> threadsForNextStep)
+    {
+        ArgumentNullException.ThrowIfNull(threadsForNextStep);
         Model = model;
         _accurate = accurate;
         _screening = screening;
-        _maxParallelism = maxParallelism ?? Environment.ProcessorCount;
+        _threadsForNextStep = threadsForNextStep;
+    }
+
+    private static Func<int> Fixed(int maxParallelism)
+    {
+        ArgumentOutOfRangeException.ThrowIfLessThan(maxParallelism, 1, nameof(maxParallelism));
+        return () => maxParallelism;
     }
 
     /// <summary>A finder for a model on the embedded ephemerides (truncated series for screening).</summary>
     public static EclipseFinder OnEmbeddedEphemerides(ShadowModel model, int? maxParallelism = null) =>
         new(model, ApparentPlaceCalculator.Default, ApparentPlaceCalculator.Screening, maxParallelism);
+
+    /// <summary>A finder for a model on the embedded ephemerides whose searches ask per step how many threads to use.</summary>
+    public static EclipseFinder OnEmbeddedEphemerides(ShadowModel model, Func<int> threadsForNextStep) =>
+        new(model, ApparentPlaceCalculator.Default, ApparentPlaceCalculator.Screening, threadsForNextStep);
 
     /// <summary>The finder for a model from the process-wide default set, for use without dependency injection.</summary>
     public static EclipseFinder For(ShadowModel model) => EclipseFinders.Shared.For(model);
@@ -81,7 +105,7 @@ public sealed class EclipseFinder
         {
             var stepEnd = Math.Min(last, stepStart + LunationsPerStep - 1);
             cancellationToken.ThrowIfCancellationRequested();
-            SolveInParallel(stepStart, stepEnd);
+            SolveInParallel(stepStart, stepEnd, cancellationToken);
             for (var k = stepStart; k <= stepEnd; k++)
             {
                 cancellationToken.ThrowIfCancellationRequested();
@@ -120,10 +144,12 @@ public sealed class EclipseFinder
 
     // Solves the lunations of one step of a range on several threads; each is cached, so the ordered read that follows
     // only collects them. The answers do not depend on the order: each lunation's result is a function of k alone.
-    private void SolveInParallel(long first, long last)
+    private void SolveInParallel(long first, long last, CancellationToken cancellationToken)
     {
-        if (_maxParallelism <= 1 || last - first < 8) return;
-        Parallel.For(first, last + 1, new ParallelOptions { MaxDegreeOfParallelism = _maxParallelism }, k => AtLunation(k));
+        if (last - first < 8) return;
+        var threads = _threadsForNextStep();
+        if (threads <= 1) return;
+        Parallel.For(first, last + 1, new ParallelOptions { MaxDegreeOfParallelism = threads, CancellationToken = cancellationToken }, k => AtLunation(k));
     }
 
     private EclipseSolution? Solved(long k) => Once(_solved, k, Compute);

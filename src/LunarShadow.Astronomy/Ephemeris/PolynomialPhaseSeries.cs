@@ -5,8 +5,8 @@ namespace LunarShadow.Astronomy.Ephemeris;
 
 /// <summary>
 /// A Poisson series Σₖ tᵏ Σᵢ Aₖᵢ·sin(φₖᵢ(t)) whose phases are polynomials φ = p₀ + p₁t + p₂t² + p₃t³ + p₄t⁴,
-/// the shape both ELP/MPP02 and VSOP87 take. Stored column-wise and summed four terms at a time, giving the
-/// value and its time derivative in one pass.
+/// the shape both ELP/MPP02 and VSOP87 take. Stored column-wise and summed eight or four terms at a time (the widest
+/// vectors the hardware runs), giving the value and its time derivative in one pass.
 /// </summary>
 internal sealed class PolynomialPhaseSeries
 {
@@ -59,13 +59,32 @@ internal sealed class PolynomialPhaseSeries
         return shape == TermShape.Sine ? FromSineRows(powers) : FromCosineRows(powers);
     }
 
+    /// <summary>How the terms are summed: the widest the hardware runs natively, or one width (for tests).</summary>
+    internal enum SumWidth
+    {
+        /// <summary>512-bit vectors where the hardware has them, else 256-bit, else one term at a time.</summary>
+        Widest,
+
+        /// <summary>Eight terms at a time (needs Vector512 hardware).</summary>
+        Vector512,
+
+        /// <summary>Four terms at a time (needs Vector256 hardware).</summary>
+        Vector256,
+
+        /// <summary>One term at a time.</summary>
+        Scalar,
+    }
+
     /// <summary>The series' value and its derivative with respect to t.</summary>
-    public (double Value, double Rate) Evaluate(double t)
+    public (double Value, double Rate) Evaluate(double t) => Evaluate(t, SumWidth.Widest);
+
+    /// <summary>The series' value and its derivative, summed at the given width.</summary>
+    internal (double Value, double Rate) Evaluate(double t, SumWidth width)
     {
         double value = 0, rate = 0;
         foreach (var g in _groups)
         {
-            var (sum, sumRate) = g.Sum(t);
+            var (sum, sumRate) = g.Sum(t, width);
             var tk = g.Power == 0 ? 1.0 : Math.Pow(t, g.Power);
             var dtk = g.Power == 0 ? 0.0 : g.Power * Math.Pow(t, g.Power - 1);
             value += tk * sum;
@@ -76,7 +95,8 @@ internal sealed class PolynomialPhaseSeries
 
     private sealed class PowerGroup
     {
-        private const int Lanes = 4;
+        // Terms are padded to a multiple of 8, so both 4- and 8-lane sums read whole vectors.
+        private const int Lanes = 8;
         private readonly double[] _a, _p0, _p1, _p2, _p3, _p4;
         private readonly bool _linearPhase;
 
@@ -109,11 +129,59 @@ internal sealed class PolynomialPhaseSeries
         }
 
         /// <summary>Σ A·sin φ and Σ A·cos φ·φ′ at t.</summary>
-        public (double Sum, double Rate) Sum(double t) =>
-            Vector256.IsHardwareAccelerated ? SumVector(t) : SumScalar(t);
+        public (double Sum, double Rate) Sum(double t, SumWidth width) => width switch
+        {
+            SumWidth.Vector512 => SumVector512(t),
+            SumWidth.Vector256 => SumVector256(t),
+            SumWidth.Scalar => SumScalar(t),
+            _ => Vector512.IsHardwareAccelerated ? SumVector512(t) : Vector256.IsHardwareAccelerated ? SumVector256(t) : SumScalar(t),
+        };
 
         [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-        private (double, double) SumVector(double t)
+        private (double, double) SumVector512(double t)
+        {
+            var vt = Vector512.Create(t);
+            var t2 = t * t;
+            var vt2 = Vector512.Create(t2);
+            var vt3 = Vector512.Create(t2 * t);
+            var vt4 = Vector512.Create(t2 * t2);
+            var two = Vector512.Create(2.0);
+            var threeT2 = Vector512.Create(3.0 * t2);
+            var fourT3 = Vector512.Create(4.0 * t2 * t);
+            var twoPi = Vector512.Create(2 * Math.PI);
+            var invTwoPi = Vector512.Create(1 / (2 * Math.PI));
+            var sum = Vector512<double>.Zero;
+            var rate = Vector512<double>.Zero;
+            ReadOnlySpan<double> a = _a, p0 = _p0, p1 = _p1, p2 = _p2, p3 = _p3, p4 = _p4;
+            for (var i = 0; i < a.Length; i += Vector512<double>.Count)
+            {
+                var c1 = Vector512.Create(p1.Slice(i, Vector512<double>.Count));
+                Vector512<double> phase, phaseRate;
+                if (_linearPhase)
+                {
+                    phase = Vector512.Create(p0.Slice(i, Vector512<double>.Count)) + c1 * vt;
+                    phaseRate = c1;
+                }
+                else
+                {
+                    var c2 = Vector512.Create(p2.Slice(i, Vector512<double>.Count));
+                    var c3 = Vector512.Create(p3.Slice(i, Vector512<double>.Count));
+                    var c4 = Vector512.Create(p4.Slice(i, Vector512<double>.Count));
+                    phase = Vector512.Create(p0.Slice(i, Vector512<double>.Count)) + c1 * vt + c2 * vt2 + c3 * vt3 + c4 * vt4;
+                    phaseRate = c1 + two * c2 * vt + c3 * threeT2 + c4 * fourT3;
+                }
+                phase -= twoPi * Vector512.Round(phase * invTwoPi);
+                var (sin, cos) = Vector512.SinCos(phase);
+                var amplitude = Vector512.Create(a.Slice(i, Vector512<double>.Count));
+                sum += amplitude * sin;
+                rate += amplitude * cos * phaseRate;
+            }
+            return (Vector512.Sum(sum), Vector512.Sum(rate));
+        }
+
+        // The same loop as SumVector512, four lanes wide (.NET has no public interface over both vector widths).
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+        private (double, double) SumVector256(double t)
         {
             var vt = Vector256.Create(t);
             var t2 = t * t;
@@ -128,26 +196,26 @@ internal sealed class PolynomialPhaseSeries
             var sum = Vector256<double>.Zero;
             var rate = Vector256<double>.Zero;
             ReadOnlySpan<double> a = _a, p0 = _p0, p1 = _p1, p2 = _p2, p3 = _p3, p4 = _p4;
-            for (var i = 0; i < a.Length; i += Lanes)
+            for (var i = 0; i < a.Length; i += Vector256<double>.Count)
             {
-                var c1 = Vector256.Create(p1.Slice(i, Lanes));
+                var c1 = Vector256.Create(p1.Slice(i, Vector256<double>.Count));
                 Vector256<double> phase, phaseRate;
                 if (_linearPhase)
                 {
-                    phase = Vector256.Create(p0.Slice(i, Lanes)) + c1 * vt;
+                    phase = Vector256.Create(p0.Slice(i, Vector256<double>.Count)) + c1 * vt;
                     phaseRate = c1;
                 }
                 else
                 {
-                    var c2 = Vector256.Create(p2.Slice(i, Lanes));
-                    var c3 = Vector256.Create(p3.Slice(i, Lanes));
-                    var c4 = Vector256.Create(p4.Slice(i, Lanes));
-                    phase = Vector256.Create(p0.Slice(i, Lanes)) + c1 * vt + c2 * vt2 + c3 * vt3 + c4 * vt4;
+                    var c2 = Vector256.Create(p2.Slice(i, Vector256<double>.Count));
+                    var c3 = Vector256.Create(p3.Slice(i, Vector256<double>.Count));
+                    var c4 = Vector256.Create(p4.Slice(i, Vector256<double>.Count));
+                    phase = Vector256.Create(p0.Slice(i, Vector256<double>.Count)) + c1 * vt + c2 * vt2 + c3 * vt3 + c4 * vt4;
                     phaseRate = c1 + two * c2 * vt + c3 * threeT2 + c4 * fourT3;
                 }
                 phase -= twoPi * Vector256.Round(phase * invTwoPi);
                 var (sin, cos) = Vector256.SinCos(phase);
-                var amplitude = Vector256.Create(a.Slice(i, Lanes));
+                var amplitude = Vector256.Create(a.Slice(i, Vector256<double>.Count));
                 sum += amplitude * sin;
                 rate += amplitude * cos * phaseRate;
             }

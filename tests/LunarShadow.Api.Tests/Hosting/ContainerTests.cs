@@ -103,6 +103,8 @@ public partial class ContainerTests
             var live = await WaitForLive(client, service, TimeSpan.FromSeconds(90));
             Assert.True(live, "no answer on the container port: " + log);
             Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/health/ready")).StatusCode);
+            // Readiness sent one request through the whole pipeline on the container's own port first.
+            lock (log) Assert.Contains($"GET {LunarShadow.Api.Hosting.PipelineWarmUp.PathAndQuery} answered 200", log.ToString(), StringComparison.Ordinal);
             Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/")).StatusCode);
             Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/api/v1/eclipses/2025-03-14")).StatusCode);
             // The image's HEALTHCHECK command, as the container runtime runs it: healthy when one of 3 tries (--retries=3)

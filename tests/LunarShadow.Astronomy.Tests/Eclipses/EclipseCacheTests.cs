@@ -53,6 +53,21 @@ public class EclipseCacheTests
     }
 
     [Fact]
+    public void A_search_asks_for_its_threads_once_a_step_and_its_answers_do_not_depend_on_them()
+    {
+        var asked = 0;
+        // Alternate one thread and four, as a host does when other requests come and go.
+        var varying = EclipseFinder.OnEmbeddedEphemerides(ShadowModel.Danjon,
+            () => ++asked % 2 == 0 ? 4 : 1);
+        var answers = varying.Between(At(1950), At(2050)).ToList();
+        var sequential = EclipseFinder.OnEmbeddedEphemerides(ShadowModel.Danjon, maxParallelism: 1).Between(At(1950), At(2050)).ToList();
+
+        // 100 years are some 1237 lunations: about ten steps of LunationsPerStep, each asking once.
+        Assert.InRange(asked, 1237 / EclipseFinder.LunationsPerStep, 1237 / EclipseFinder.LunationsPerStep + 2);
+        Assert.Equal(sequential.Select(e => (e.Lunation, e.GreatestEclipse, e.Saros)), answers.Select(e => (e.Lunation, e.GreatestEclipse, e.Saros)));
+    }
+
+    [Fact]
     public void A_parallel_search_gives_exactly_the_sequential_answers()
     {
         var sequential = EclipseFinder.OnEmbeddedEphemerides(ShadowModel.Danjon, maxParallelism: 1).Between(At(1950), At(2050)).ToList();
