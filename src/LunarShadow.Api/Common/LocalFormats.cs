@@ -45,7 +45,7 @@ internal static class LocalFormats
             Row("moon-event", e.Type, e.Utc, e.Local, azimuth: e.AzimuthDegrees);
         foreach (var p in r.VisiblePhases)
             Row("visible-phase", p.Phase, p.StartUtc, p.StartLocal, p.EndUtc, p.EndLocal, p.Minutes);
-        if (r.MaxVisibleUmbralMagnitude is { } m)
+        if (r.GreatestVisibleUmbralMagnitude is { } m)
             Row("deepest-visible", "greatest-visible", m.Utc, m.Local, altitude: m.AltitudeDegrees, magnitude: m.Value);
         if (r.PublicNight is { } plan)
         {

@@ -33,7 +33,7 @@ internal static class LocalMapping
             WireNames.Of(l.HorizonState),
             l.VisiblePhases.Select(p => Phase(p, zone)).ToList(),
             TimeFormats.Round(l.VisibleMinutes(EclipsePhase.Total), 2),
-            l.MaxVisibleUmbralMagnitude is { } m
+            l.GreatestVisibleUmbralMagnitude is { } m
                 ? new VisibleMagnitudeResponse(TimeFormats.Round(m.Value, 4), TimeFormats.Utc(m.Utc), Local(m.Utc), TimeFormats.Round(m.Altitude.Degrees, 2))
                 : null,
             SiteWording.Summary(l),

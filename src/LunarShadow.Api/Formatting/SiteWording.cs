@@ -77,7 +77,7 @@ internal static class SiteWording
             text += $"; totality happens while the Moon is {below}";
         else if (local.Eclipse.Kind == EclipseKind.Total)
             text += string.Create(CultureInfo.InvariantCulture, $"; {o.VisibleTotalityMinutes:0} of {o.TotalityMinutes:0} minutes of totality can be seen");
-        if (local.MaxVisibleUmbralMagnitude is { } best && best.Value > 0)
+        if (local.GreatestVisibleUmbralMagnitude is { } best && best.Value > 0)
         {
             text += string.Create(CultureInfo.InvariantCulture,
                 $", deepest at {Clock(best.Utc, zone)} (umbral magnitude {best.Value:0.00}, {(best.Altitude.Degrees < 1 ? "Moon on the horizon" : $"Moon {best.Altitude.Degrees:0}° high")})");

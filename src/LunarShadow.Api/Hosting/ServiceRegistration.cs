@@ -19,6 +19,7 @@ internal static class ServiceRegistration
         // The eclipse caches, one set per host; a range search splits its work over every core the options allow while it is
         // the only request, and over ThreadsPerSearch as soon as another request is in flight.
         var inFlight = new RequestsInFlight(RateLimiting.Options(builder.Configuration));
+        WorkerThreadFloor.Apply();
         builder.Services.AddSingleton(inFlight);
         builder.Services.AddSingleton(new LunarShadow.Astronomy.Eclipses.EclipseFinders(model =>
             LunarShadow.Astronomy.Eclipses.EclipseFinder.OnEmbeddedEphemerides(model, inFlight.ThreadsForNextSearchStep)));

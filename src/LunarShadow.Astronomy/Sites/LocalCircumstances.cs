@@ -10,7 +10,7 @@ namespace LunarShadow.Astronomy.Sites;
 /// <param name="MoonEvents">Rising, setting and horizon-profile events within 12 hours of greatest eclipse.</param>
 /// <param name="HorizonState">Whether the Moon crosses the horizon in those 24 hours.</param>
 /// <param name="VisiblePhases">The visible stretches of each phase.</param>
-/// <param name="MaxVisibleUmbralMagnitude">The largest umbral magnitude seen, or null when nothing is seen.</param>
+/// <param name="GreatestVisibleUmbralMagnitude">The largest umbral magnitude seen, or null when nothing is seen.</param>
 public sealed record LocalCircumstances(
     Site Site,
     LunarEclipse Eclipse,
@@ -19,7 +19,7 @@ public sealed record LocalCircumstances(
     IReadOnlyList<MoonEvent> MoonEvents,
     MoonHorizonState HorizonState,
     IReadOnlyList<VisibleSpan> VisiblePhases,
-    MaxVisibleMagnitude? MaxVisibleUmbralMagnitude)
+    GreatestVisibleMagnitude? GreatestVisibleUmbralMagnitude)
 {
     /// <summary>Total visible minutes of a phase.</summary>
     public double VisibleMinutes(EclipsePhase phase) => VisiblePhases.Where(p => p.Phase == phase).Sum(p => p.Minutes);

@@ -95,7 +95,7 @@ public static class LocalCircumstancesCalculator
 
     // The umbral magnitude rises to its greatest value and falls again, so its largest visible value is at greatest
     // eclipse when that is visible, otherwise at the visible moment nearest to it.
-    private static MaxVisibleMagnitude? LargestVisibleMagnitude(LunarEclipse eclipse, LocalSky sky, List<VisibleSpan> phases, Func<TtInstant, NodaTime.Instant> toUtc)
+    private static GreatestVisibleMagnitude? LargestVisibleMagnitude(LunarEclipse eclipse, LocalSky sky, List<VisibleSpan> phases, Func<TtInstant, NodaTime.Instant> toUtc)
     {
         var whole = phases.Where(p => p.Phase == EclipsePhase.Penumbral).ToList();
         if (whole.Count == 0) return null;
@@ -109,6 +109,6 @@ public static class LocalCircumstancesCalculator
         var s = g.MoonSemiDiameter.Radians;
         var magnitude = tt == greatest ? eclipse.UmbralMagnitude : ShadowCrossSection.Magnitude(radii.Umbra.Radians, s, g.Separation.Radians);
         var altitude = sky.MoonAt(sky.Night.HoursFromCenter(tt)).ApparentAltitude;
-        return new MaxVisibleMagnitude(magnitude, tt, toUtc(tt), altitude);
+        return new GreatestVisibleMagnitude(magnitude, tt, toUtc(tt), altitude);
     }
 }

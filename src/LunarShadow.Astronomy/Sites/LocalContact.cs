@@ -26,4 +26,4 @@ public sealed record LocalContact(
 /// <param name="Tt">When, TT.</param>
 /// <param name="Utc">When, UTC.</param>
 /// <param name="Altitude">The Moon's apparent altitude then.</param>
-public sealed record MaxVisibleMagnitude(double Value, TtInstant Tt, Instant Utc, Angle Altitude);
+public sealed record GreatestVisibleMagnitude(double Value, TtInstant Tt, Instant Utc, Angle Altitude);

@@ -57,11 +57,11 @@ public class LocalCircumstancesTests
         var newYork = At(2025, 3, 14, 40.71, -74.0, "America/New_York");
         Assert.True(Whole(newYork));
         Assert.Equal(newYork.Eclipse.Durations.TotalMinutes!.Value, newYork.VisibleMinutes(EclipsePhase.Total), 1e-6);
-        Assert.Equal(newYork.Eclipse.UmbralMagnitude, newYork.MaxVisibleUmbralMagnitude!.Value, 9);
+        Assert.Equal(newYork.Eclipse.UmbralMagnitude, newYork.GreatestVisibleUmbralMagnitude!.Value, 9);
         var london = At(2025, 3, 14, 51.5, -0.12, "Europe/London");
         Assert.False(Whole(london));
         Assert.True(london.VisibleMinutes(EclipsePhase.Partial) > 0);
-        Assert.True(london.MaxVisibleUmbralMagnitude!.Value < london.Eclipse.UmbralMagnitude);
+        Assert.True(london.GreatestVisibleUmbralMagnitude!.Value < london.Eclipse.UmbralMagnitude);
     }
 
     [Fact]

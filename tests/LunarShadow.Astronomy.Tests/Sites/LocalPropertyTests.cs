@@ -40,7 +40,7 @@ public class LocalPropertyTests
                     Assert.True(atContact || atEvent, $"edge {edge} of {span.Phase} is neither a contact nor a rising or setting");
                 }
             }
-            if (local.MaxVisibleUmbralMagnitude is { } best) Assert.True(best.Value <= eclipse.UmbralMagnitude + 1e-12);
+            if (local.GreatestVisibleUmbralMagnitude is { } best) Assert.True(best.Value <= eclipse.UmbralMagnitude + 1e-12);
             Assert.All(local.Contacts, c => Assert.Equal(local.VisiblePhases.Any(p => p.StartTt.SecondsSince(c.Tt) <= 1e-3 && c.Tt.SecondsSince(p.EndTt) <= 1e-3), c.Visible));
         }
     }
