@@ -137,89 +137,59 @@ internal sealed class PolynomialPhaseSeries
             _ => Vector512.IsHardwareAccelerated ? SumVector512(t) : Vector256.IsHardwareAccelerated ? SumVector256(t) : SumScalar(t),
         };
 
-        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-        private (double, double) SumVector512(double t)
-        {
-            var vt = Vector512.Create(t);
-            var t2 = t * t;
-            var vt2 = Vector512.Create(t2);
-            var vt3 = Vector512.Create(t2 * t);
-            var vt4 = Vector512.Create(t2 * t2);
-            var two = Vector512.Create(2.0);
-            var threeT2 = Vector512.Create(3.0 * t2);
-            var fourT3 = Vector512.Create(4.0 * t2 * t);
-            var twoPi = Vector512.Create(2 * Math.PI);
-            var invTwoPi = Vector512.Create(1 / (2 * Math.PI));
-            var sum = Vector512<double>.Zero;
-            var rate = Vector512<double>.Zero;
-            ReadOnlySpan<double> a = _a, p0 = _p0, p1 = _p1, p2 = _p2, p3 = _p3, p4 = _p4;
-            for (var i = 0; i < a.Length; i += Vector512<double>.Count)
-            {
-                var c1 = Vector512.Create(p1.Slice(i, Vector512<double>.Count));
-                Vector512<double> phase, phaseRate;
-                if (_linearPhase)
-                {
-                    phase = Vector512.Create(p0.Slice(i, Vector512<double>.Count)) + c1 * vt;
-                    phaseRate = c1;
-                }
-                else
-                {
-                    var c2 = Vector512.Create(p2.Slice(i, Vector512<double>.Count));
-                    var c3 = Vector512.Create(p3.Slice(i, Vector512<double>.Count));
-                    var c4 = Vector512.Create(p4.Slice(i, Vector512<double>.Count));
-                    phase = Vector512.Create(p0.Slice(i, Vector512<double>.Count)) + c1 * vt + c2 * vt2 + c3 * vt3 + c4 * vt4;
-                    phaseRate = c1 + two * c2 * vt + c3 * threeT2 + c4 * fourT3;
-                }
-                phase -= twoPi * Vector512.Round(phase * invTwoPi);
-                var (sin, cos) = Vector512.SinCos(phase);
-                var amplitude = Vector512.Create(a.Slice(i, Vector512<double>.Count));
-                sum += amplitude * sin;
-                rate += amplitude * cos * phaseRate;
-            }
-            return (Vector512.Sum(sum), Vector512.Sum(rate));
-        }
+        private (double, double) SumVector512(double t) => SumVector<Vector512<double>, Lanes512>(t);
 
-        // The same loop as SumVector512, four lanes wide (.NET has no public interface over both vector widths).
+        private (double, double) SumVector256(double t) => SumVector<Vector256<double>, Lanes256>(t);
+
+        // One loop for every vector width, compiled once per lane type with the lanes' calls inlined. Per lane:
+        // φ = p₀ + p₁t + p₂t² + p₃t³ + p₄t⁴ reduced to ±π, φ′ = p₁ + 2p₂t + 3p₃t² + 4p₄t³; sum += A·sin φ, rate += A·cos φ·φ′
+        // (the operations in the order SumScalar writes them, left to right).
         [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-        private (double, double) SumVector256(double t)
+        private (double, double) SumVector<TVector, TLanes>(double t)
+            where TLanes : struct, ILanes<TVector>
         {
-            var vt = Vector256.Create(t);
+            var vt = TLanes.Splat(t);
             var t2 = t * t;
-            var vt2 = Vector256.Create(t2);
-            var vt3 = Vector256.Create(t2 * t);
-            var vt4 = Vector256.Create(t2 * t2);
-            var two = Vector256.Create(2.0);
-            var threeT2 = Vector256.Create(3.0 * t2);
-            var fourT3 = Vector256.Create(4.0 * t2 * t);
-            var twoPi = Vector256.Create(2 * Math.PI);
-            var invTwoPi = Vector256.Create(1 / (2 * Math.PI));
-            var sum = Vector256<double>.Zero;
-            var rate = Vector256<double>.Zero;
+            var vt2 = TLanes.Splat(t2);
+            var vt3 = TLanes.Splat(t2 * t);
+            var vt4 = TLanes.Splat(t2 * t2);
+            var two = TLanes.Splat(2.0);
+            var threeT2 = TLanes.Splat(3.0 * t2);
+            var fourT3 = TLanes.Splat(4.0 * t2 * t);
+            var twoPi = TLanes.Splat(2 * Math.PI);
+            var invTwoPi = TLanes.Splat(1 / (2 * Math.PI));
+            var sum = TLanes.Splat(0);
+            var rate = TLanes.Splat(0);
             ReadOnlySpan<double> a = _a, p0 = _p0, p1 = _p1, p2 = _p2, p3 = _p3, p4 = _p4;
-            for (var i = 0; i < a.Length; i += Vector256<double>.Count)
+            for (var i = 0; i < a.Length; i += TLanes.Count)
             {
-                var c1 = Vector256.Create(p1.Slice(i, Vector256<double>.Count));
-                Vector256<double> phase, phaseRate;
+                var c1 = TLanes.Load(p1.Slice(i, TLanes.Count));
+                TVector phase, phaseRate;
                 if (_linearPhase)
                 {
-                    phase = Vector256.Create(p0.Slice(i, Vector256<double>.Count)) + c1 * vt;
+                    phase = TLanes.Add(TLanes.Load(p0.Slice(i, TLanes.Count)), TLanes.Multiply(c1, vt));
                     phaseRate = c1;
                 }
                 else
                 {
-                    var c2 = Vector256.Create(p2.Slice(i, Vector256<double>.Count));
-                    var c3 = Vector256.Create(p3.Slice(i, Vector256<double>.Count));
-                    var c4 = Vector256.Create(p4.Slice(i, Vector256<double>.Count));
-                    phase = Vector256.Create(p0.Slice(i, Vector256<double>.Count)) + c1 * vt + c2 * vt2 + c3 * vt3 + c4 * vt4;
-                    phaseRate = c1 + two * c2 * vt + c3 * threeT2 + c4 * fourT3;
+                    var c2 = TLanes.Load(p2.Slice(i, TLanes.Count));
+                    var c3 = TLanes.Load(p3.Slice(i, TLanes.Count));
+                    var c4 = TLanes.Load(p4.Slice(i, TLanes.Count));
+                    phase = TLanes.Add(TLanes.Load(p0.Slice(i, TLanes.Count)), TLanes.Multiply(c1, vt));
+                    phase = TLanes.Add(phase, TLanes.Multiply(c2, vt2));
+                    phase = TLanes.Add(phase, TLanes.Multiply(c3, vt3));
+                    phase = TLanes.Add(phase, TLanes.Multiply(c4, vt4));
+                    phaseRate = TLanes.Add(c1, TLanes.Multiply(TLanes.Multiply(two, c2), vt));
+                    phaseRate = TLanes.Add(phaseRate, TLanes.Multiply(c3, threeT2));
+                    phaseRate = TLanes.Add(phaseRate, TLanes.Multiply(c4, fourT3));
                 }
-                phase -= twoPi * Vector256.Round(phase * invTwoPi);
-                var (sin, cos) = Vector256.SinCos(phase);
-                var amplitude = Vector256.Create(a.Slice(i, Vector256<double>.Count));
-                sum += amplitude * sin;
-                rate += amplitude * cos * phaseRate;
+                phase = TLanes.Subtract(phase, TLanes.Multiply(twoPi, TLanes.Round(TLanes.Multiply(phase, invTwoPi))));
+                var (sin, cos) = TLanes.SinCos(phase);
+                var amplitude = TLanes.Load(a.Slice(i, TLanes.Count));
+                sum = TLanes.Add(sum, TLanes.Multiply(amplitude, sin));
+                rate = TLanes.Add(rate, TLanes.Multiply(TLanes.Multiply(amplitude, cos), phaseRate));
             }
-            return (Vector256.Sum(sum), Vector256.Sum(rate));
+            return (TLanes.Sum(sum), TLanes.Sum(rate));
         }
 
         private (double, double) SumScalar(double t)
@@ -235,5 +205,69 @@ internal sealed class PolynomialPhaseSeries
             }
             return (sum, rate);
         }
+    }
+
+    // What the summing loop needs of a vector type; .NET has no public interface over the vector widths.
+    private interface ILanes<TVector>
+    {
+        static abstract int Count { get; }
+
+        static abstract TVector Load(ReadOnlySpan<double> values);
+
+        static abstract TVector Splat(double value);
+
+        static abstract TVector Round(TVector value);
+
+        static abstract (TVector Sin, TVector Cos) SinCos(TVector value);
+
+        static abstract double Sum(TVector value);
+
+        static abstract TVector Add(TVector left, TVector right);
+
+        static abstract TVector Subtract(TVector left, TVector right);
+
+        static abstract TVector Multiply(TVector left, TVector right);
+    }
+
+    private readonly struct Lanes256 : ILanes<Vector256<double>>
+    {
+        public static int Count => Vector256<double>.Count;
+
+        public static Vector256<double> Load(ReadOnlySpan<double> values) => Vector256.Create(values);
+
+        public static Vector256<double> Splat(double value) => Vector256.Create(value);
+
+        public static Vector256<double> Round(Vector256<double> value) => Vector256.Round(value);
+
+        public static (Vector256<double> Sin, Vector256<double> Cos) SinCos(Vector256<double> value) => Vector256.SinCos(value);
+
+        public static double Sum(Vector256<double> value) => Vector256.Sum(value);
+
+        public static Vector256<double> Add(Vector256<double> left, Vector256<double> right) => left + right;
+
+        public static Vector256<double> Subtract(Vector256<double> left, Vector256<double> right) => left - right;
+
+        public static Vector256<double> Multiply(Vector256<double> left, Vector256<double> right) => left * right;
+    }
+
+    private readonly struct Lanes512 : ILanes<Vector512<double>>
+    {
+        public static int Count => Vector512<double>.Count;
+
+        public static Vector512<double> Load(ReadOnlySpan<double> values) => Vector512.Create(values);
+
+        public static Vector512<double> Splat(double value) => Vector512.Create(value);
+
+        public static Vector512<double> Round(Vector512<double> value) => Vector512.Round(value);
+
+        public static (Vector512<double> Sin, Vector512<double> Cos) SinCos(Vector512<double> value) => Vector512.SinCos(value);
+
+        public static double Sum(Vector512<double> value) => Vector512.Sum(value);
+
+        public static Vector512<double> Add(Vector512<double> left, Vector512<double> right) => left + right;
+
+        public static Vector512<double> Subtract(Vector512<double> left, Vector512<double> right) => left - right;
+
+        public static Vector512<double> Multiply(Vector512<double> left, Vector512<double> right) => left * right;
     }
 }
