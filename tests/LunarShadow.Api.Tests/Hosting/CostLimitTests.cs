@@ -10,17 +10,20 @@ public class CostLimitTests
     // layer height): seconds of work.
     private static string Hopeless(string layerKm) => $"/api/v1/sites/upcoming?lat=89.9&lon=0&from=-1999-01-01&years=1000&phase=total&night=true&count=50&shadow=layer&layerKm={layerKm}";
 
+    // A host where the request rate never limits, and each client has one expensive turn and no queue.
+    private static WebApplicationFactory<Program> OneExpensiveTurnPerClient() => new WebApplicationFactory<Program>().WithWebHostBuilder(b =>
+    {
+        b.UseSetting("RateLimiting:PermitsPerSecond", "1000");
+        b.UseSetting("RateLimiting:Burst", "1000");
+        b.UseSetting("RateLimiting:ExpensivePerClient", "1");
+        b.UseSetting("RateLimiting:ExpensiveQueuePerClient", "0");
+        b.UseSetting("RequestTimeoutSeconds", "15");
+    });
+
     [Fact]
     public async Task A_client_runs_one_expensive_request_at_a_time_while_its_cheap_requests_still_get_through()
     {
-        await using var factory = new WebApplicationFactory<Program>().WithWebHostBuilder(b =>
-        {
-            b.UseSetting("RateLimiting:PermitsPerSecond", "1000");
-            b.UseSetting("RateLimiting:Burst", "1000");
-            b.UseSetting("RateLimiting:ExpensivePerClient", "1");
-            b.UseSetting("RateLimiting:ExpensiveQueuePerClient", "0");
-            b.UseSetting("RequestTimeoutSeconds", "15");
-        });
+        await using var factory = OneExpensiveTurnPerClient();
         var client = factory.CreateClient();
         Assert.Equal(HttpStatusCode.OK, (await client.GetAsync("/api/v1/eclipses/2025-03-14")).StatusCode); // host started
         var first = client.GetAsync(Hopeless("234.5"));
@@ -39,14 +42,7 @@ public class CostLimitTests
     [Fact]
     public async Task A_stored_search_answer_is_served_at_once_even_while_the_client_has_a_search_running()
     {
-        await using var factory = new WebApplicationFactory<Program>().WithWebHostBuilder(b =>
-        {
-            b.UseSetting("RateLimiting:PermitsPerSecond", "1000");
-            b.UseSetting("RateLimiting:Burst", "1000");
-            b.UseSetting("RateLimiting:ExpensivePerClient", "1");
-            b.UseSetting("RateLimiting:ExpensiveQueuePerClient", "0");
-            b.UseSetting("RequestTimeoutSeconds", "15");
-        });
+        await using var factory = OneExpensiveTurnPerClient();
         var client = factory.CreateClient();
         const string Stored = "/api/v1/sites/upcoming?lat=47.07&lon=15.44&from=2025-01-01&count=1";
         Assert.Equal(HttpStatusCode.OK, (await client.GetAsync(Stored)).StatusCode);
