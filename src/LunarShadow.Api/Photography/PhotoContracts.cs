@@ -90,7 +90,17 @@ public sealed record WarningResponse(string Code, IReadOnlyDictionary<string, do
 /// <param name="Ev100">EV at ISO 100 of the exposure.</param>
 /// <param name="BracketStops">The bracket's half-width, stops.</param>
 /// <param name="BracketShutterSeconds">Shutter times of the bracket, darkest first.</param>
-public sealed record ExposureResponse(double ShutterSeconds, double Iso, double Aperture, double Ev100, int BracketStops, IReadOnlyList<double> BracketShutterSeconds);
+/// <param name="Settable">The same exposure as a camera can be set: third-stop ISO and marked shutter times.</param>
+public sealed record ExposureResponse(double ShutterSeconds, double Iso, double Aperture, double Ev100, int BracketStops, IReadOnlyList<double> BracketShutterSeconds,
+    SettableExposureResponse Settable);
+
+/// <summary>An exposure as a camera can be set (docs/photography.md).</summary>
+/// <param name="Shutter">The shutter as the camera shows it: "1/160 s", "0.3 s", "2.5 s"; beyond 30 s whole seconds on bulb, "47 s bulb".</param>
+/// <param name="ShutterSeconds">The time that marking stands for (1/160 s is 2^(−22/3) s), or the bulb time.</param>
+/// <param name="Iso">The ISO as the camera shows it (third stops, 25 to 409600).</param>
+/// <param name="OffStops">How far the settable exposure is from the computed one, stops (positive: brighter); within ±1/6 unless the camera's limits forced more.</param>
+/// <param name="BracketShutters">The bracket's shutter times set the same way, one per computed bracket time, darkest first.</param>
+public sealed record SettableExposureResponse(string Shutter, double ShutterSeconds, double Iso, double OffStops, IReadOnlyList<string> BracketShutters);
 
 /// <summary>Framing.</summary>
 /// <param name="FieldOfViewWidthDegrees">Horizontal field (landscape), degrees.</param>
@@ -135,4 +145,6 @@ public sealed record TimeLapseResponse(double IntervalSeconds, int Frames, doubl
 /// <param name="Iso">ISO.</param>
 /// <param name="Aperture">f-number.</param>
 /// <param name="Note">A note that starts at this step and holds for a run of steps (e.g. the ISO change through totality), or null.</param>
-public sealed record SequenceStep(string Instant, double ShutterSeconds, double Iso, double Aperture, string? Note = null);
+/// <param name="SettableShutter">The shutter as the camera shows it ("1/160 s"), the nearest marked time to this step's.</param>
+/// <param name="SettableIso">The ISO as the camera shows it, the nearest third stop to this step's.</param>
+public sealed record SequenceStep(string Instant, double ShutterSeconds, double Iso, double Aperture, string? Note, string SettableShutter, double SettableIso);

@@ -27,7 +27,7 @@ internal static class PhotoMapping
                 TimeFormats.Round(r.Altitude.Degrees, 2), TimeFormats.Round(r.Azimuth.Degrees, 2), TimeFormats.Round(r.AirMass, 3),
                 TimeFormats.Round(r.BrightnessStops, 2), TimeFormats.Round(r.LimbStops, 2), TimeFormats.Round(r.DiscStops, 2),
                 new ExposureResponse(Seconds(r.Exposure.ShutterSeconds), Math.Round(r.Exposure.Iso), r.Exposure.Aperture, TimeFormats.Round(r.Exposure.Ev100, 2),
-                    plan.Settings.BracketStops, r.Exposure.BracketShutters.Select(Seconds).ToList()),
+                    plan.Settings.BracketStops, r.Exposure.BracketShutters.Select(Seconds).ToList(), Settable(r.Exposure, c)),
                 r.Warnings.Select(PhotoWarningText.Sentence).ToList(),
                 r.Warnings.Select(w => new WarningResponse(WireNames.Of(w.Code), w.Numbers.ToDictionary(n => n.Key, n => TimeFormats.Round(n.Value, 4)))).ToList())).ToList(),
             new FramingResponse(TimeFormats.Round(f.FieldWidth.Degrees, 3), TimeFormats.Round(f.FieldHeight.Degrees, 3), TimeFormats.Round(f.MoonDiameterPixels, 1),
@@ -44,14 +44,22 @@ internal static class PhotoMapping
                 n.FirstRow, n.Rows, n.Numbers.ToDictionary(x => x.Key, x => TimeFormats.Round(x.Value, 4)))).ToList());
     }
 
+    private static SettableExposureResponse Settable(Exposure exposure, Camera camera)
+    {
+        var s = SettableExposure.For(exposure, camera);
+        return new SettableExposureResponse(s.ShutterLabel, Seconds(s.ShutterSeconds), s.Iso, TimeFormats.Round(s.OffStops, 2), s.BracketLabels);
+    }
+
     public static string Csv(PhotoPlanResponse r)
     {
         var csv = new CsvWriter().Row("utc", "local", "contact", "phase", "umbral_fraction", "penumbral_fraction", "moon_altitude_deg", "moon_azimuth_deg",
-            "airmass", "brightness_stops", "shutter_s", "iso", "aperture", "bracket_stops", "warnings", "local_date");
+            "airmass", "brightness_stops", "shutter_s", "iso", "aperture", "bracket_stops", "warnings", "local_date",
+            "settable_shutter", "settable_iso", "settable_off_stops");
         foreach (var (row, i) in r.Timeline.Select((row, i) => (row, i)))
             csv.Row(row.Utc, row.Local, row.Contact, row.Phase, row.UmbralFraction, row.PenumbralFraction, row.MoonAltitudeDegrees, row.MoonAzimuthDegrees,
                 row.Airmass, row.BrightnessStops, row.Exposure.ShutterSeconds, row.Exposure.Iso, row.Exposure.Aperture, row.Exposure.BracketStops,
-                string.Join("; ", row.Warnings.Concat(NotesStartingAt(r, i))), r.Night.Evening);
+                string.Join("; ", row.Warnings.Concat(NotesStartingAt(r, i))), r.Night.Evening,
+                row.Exposure.Settable.Shutter, row.Exposure.Settable.Iso, row.Exposure.Settable.OffStops);
         return csv.ToString();
     }
 
@@ -61,7 +69,8 @@ internal static class PhotoMapping
     /// </summary>
     public static List<SequenceStep> Sequence(PhotoPlanResponse r) => r.Timeline
         .SelectMany((row, i) => row.Exposure.BracketShutterSeconds.Select((t, k) =>
-            new SequenceStep(row.Utc, t, row.Exposure.Iso, row.Exposure.Aperture, k == 0 && NotesStartingAt(r, i).Any() ? string.Join("; ", NotesStartingAt(r, i)) : null)))
+            new SequenceStep(row.Utc, t, row.Exposure.Iso, row.Exposure.Aperture, k == 0 && NotesStartingAt(r, i).Any() ? string.Join("; ", NotesStartingAt(r, i)) : null,
+                row.Exposure.Settable.BracketShutters[k], row.Exposure.Settable.Iso)))
         .ToList();
 
     // The words of the run notes that start at a timeline row: each note is written once, at its run's first row.

@@ -118,6 +118,18 @@ internal static class SweepChecks
             LocalIsUtcPlusOffset(row.Utc, row.Local, local.Site.TimeZone);
             ShutterInRange(row.Exposure.ShutterSeconds, plan.Camera, "wire shutter");
             foreach (var t in row.Exposure.BracketShutterSeconds) ShutterInRange(t, plan.Camera, "wire bracket");
+            // As a camera sets it: a third-stop ISO (ISO 12232's series from 25; a marking lies within 0.1 third of the
+            // speed it stands for, 1250 for 1270), a marked or bulb time a sixth of a stop
+            // from the camera's range at most, and the computed exposure within a sixth of a stop (rounded to 0.01 on the
+            // wire) unless the ISO series' ends forced more.
+            var settable = row.Exposure.Settable;
+            var isoThirds = 3 * Math.Log2(settable.Iso / 100);
+            Require(settable.Iso >= 25 && settable.Iso <= 409600 && Math.Abs(isoThirds - Math.Round(isoThirds)) < 0.1, $"ISO {settable.Iso} is not a third stop");
+            Require(settable.ShutterSeconds >= plan.Camera.FastestShutterSeconds / 1.13 && settable.ShutterSeconds <= plan.Camera.SlowestShutterSeconds * 1.13,
+                $"settable shutter {settable.Shutter} outside the camera's range");
+            Require(Math.Abs(settable.OffStops) <= 1 / 6.0 + 0.005 || row.Exposure.Iso < 25 * 1.12 || row.Exposure.Iso > 409600 / 1.12,
+                $"settable exposure {settable.OffStops} stops from the computed one");
+            Require(settable.BracketShutters.Count == row.Exposure.BracketShutterSeconds.Count, "settable bracket length");
         }
         // A run note is given once: no row repeats it, runs lie inside the timeline, and two runs of one code never touch.
         Require(plan.Timeline.All(r => r.Warnings.All(w => !PlanNotes.GroupedCodes.Contains(w.Code))), "a row repeats a run note");
@@ -141,7 +153,13 @@ internal static class SweepChecks
     public static int Sequence(string json, Camera camera)
     {
         var steps = JsonDocument.Parse(json).RootElement.EnumerateArray().ToList();
-        foreach (var s in steps) ShutterInRange(s.GetProperty("shutterSeconds").GetDouble(), camera, "sequence");
+        foreach (var s in steps)
+        {
+            ShutterInRange(s.GetProperty("shutterSeconds").GetDouble(), camera, "sequence");
+            Require(s.GetProperty("settableShutter").GetString()!.EndsWith(" s", StringComparison.Ordinal)
+                || s.GetProperty("settableShutter").GetString()!.EndsWith(" s bulb", StringComparison.Ordinal), "sequence settable shutter label");
+            Require(s.GetProperty("settableIso").GetDouble() >= 25, "sequence settable ISO");
+        }
         return steps.Count;
     }
 
