@@ -5,34 +5,14 @@ using LunarShadow.Api.Tests.Support;
 namespace LunarShadow.Api.Tests.Observations;
 
 /// <summary>Bad observations get a 400 naming the field (with its index in a batch) and what is allowed; exact repeats 409.</summary>
-public sealed class ObservationValidationTests : IAsyncLifetime, IDisposable
+public sealed class ObservationValidationTests : ObservationLogTest
 {
-    private StorageBackend _storage = null!;
-    private ObservationHost _host = null!;
-    private HttpClient _client = null!;
     private string _key = null!;
 
-    public async Task InitializeAsync()
-    {
-        _storage = await StorageBackend.CreateAsync("sqlite");
-        _key = await ObservationHost.AddKeyAsync(_storage, "Hollowmere Hill Public Observatory");
-        _host = new ObservationHost(_storage);
-        _client = _host.CreateClient();
-    }
+    protected override async Task BeforeHostStartsAsync() =>
+        _key = await ObservationHost.AddKeyAsync(Storage, "Hollowmere Hill Public Observatory");
 
-    public async Task DisposeAsync()
-    {
-        await _host.DisposeAsync();
-        await _storage.DisposeAsync();
-    }
-
-    public void Dispose()
-    {
-        _client.Dispose();
-        _host.Dispose();
-    }
-
-    private Task<HttpResponseMessage> Post(string json) => ObservationHost.PostAsync(_client, json, _key);
+    private Task<HttpResponseMessage> Post(string json) => ObservationHost.PostAsync(Client, json, _key);
 
     [Fact]
     public async Task A_feature_not_in_the_list_is_refused() =>
@@ -92,8 +72,8 @@ public sealed class ObservationValidationTests : IAsyncLifetime, IDisposable
     {
         Assert.Equal(HttpStatusCode.Created, (await Post(ObservationSamples.TychoImmersion())).StatusCode);
         Assert.Equal(HttpStatusCode.Conflict, (await Post(ObservationSamples.TychoImmersion())).StatusCode);
-        var other = await ObservationHost.AddKeyAsync(_storage, "Invented Ridge Observatory");
-        Assert.Equal(HttpStatusCode.Created, (await ObservationHost.PostAsync(_client, ObservationSamples.TychoImmersion(), other)).StatusCode);
+        var other = await ObservationHost.AddKeyAsync(Storage, "Invented Ridge Observatory");
+        Assert.Equal(HttpStatusCode.Created, (await ObservationHost.PostAsync(Client, ObservationSamples.TychoImmersion(), other)).StatusCode);
         // A different observed instant is a different observation.
         Assert.Equal(HttpStatusCode.Created, (await Post(ObservationSamples.TychoImmersion(utc: "2025-09-07T17:09:21Z"))).StatusCode);
     }
@@ -106,19 +86,19 @@ public sealed class ObservationValidationTests : IAsyncLifetime, IDisposable
         Assert.Equal(HttpStatusCode.RequestEntityTooLarge, (await Post("\"" + new string('x', 300 * 1024) + "\"")).StatusCode);
         using var request = new HttpRequestMessage(HttpMethod.Post, ObservationHost.Url) { Content = new StringContent("<x/>", Encoding.UTF8, "text/xml") };
         request.Headers.Authorization = new System.Net.Http.Headers.AuthenticationHeaderValue("Bearer", _key);
-        Assert.Equal(HttpStatusCode.UnsupportedMediaType, (await _client.SendAsync(request)).StatusCode);
+        Assert.Equal(HttpStatusCode.UnsupportedMediaType, (await Client.SendAsync(request)).StatusCode);
     }
 
     [Fact]
     public async Task A_date_without_an_eclipse_is_404_for_reading_and_writing()
     {
-        Assert.Equal(HttpStatusCode.NotFound, (await _client.GetAsync("/api/v1/eclipses/2025-09-08/observations")).StatusCode);
+        Assert.Equal(HttpStatusCode.NotFound, (await Client.GetAsync("/api/v1/eclipses/2025-09-08/observations")).StatusCode);
         using var request = new HttpRequestMessage(HttpMethod.Post, "/api/v1/eclipses/2025-09-08/observations")
         {
             Content = new StringContent(ObservationSamples.Danjon(), Encoding.UTF8, "application/json"),
         };
         request.Headers.Authorization = new System.Net.Http.Headers.AuthenticationHeaderValue("Bearer", _key);
-        Assert.Equal(HttpStatusCode.NotFound, (await _client.SendAsync(request)).StatusCode);
+        Assert.Equal(HttpStatusCode.NotFound, (await Client.SendAsync(request)).StatusCode);
     }
 
     [Fact]
@@ -127,7 +107,7 @@ public sealed class ObservationValidationTests : IAsyncLifetime, IDisposable
         // OWASP, "CSV Injection": a cell starting with = is prefixed with a quote.
         var json = ObservationSamples.TychoImmersion(observer: "=HYPERLINK(\\\"http://example.invalid\\\")");
         Assert.Equal(HttpStatusCode.Created, (await Post(json)).StatusCode);
-        var csv = await _client.GetStringAsync(ObservationHost.Url + "?format=csv");
+        var csv = await Client.GetStringAsync(ObservationHost.Url + "?format=csv");
         Assert.Contains("'=HYPERLINK", csv, StringComparison.Ordinal);
         Assert.StartsWith("eclipse,id,kind,feature,crossing,value,utc", csv, StringComparison.Ordinal);
     }
